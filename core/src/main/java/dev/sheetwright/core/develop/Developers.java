@@ -1,0 +1,22 @@
+package dev.sheetwright.core.develop;
+
+import dev.sheetwright.core.fitting.FittingSpec;
+import dev.sheetwright.core.fitting.PipeSpec;
+import dev.sheetwright.core.fitting.ReducerSpec;
+
+/** Picks the development method for each fitting type. */
+public final class Developers {
+
+    private Developers() {
+    }
+
+    public static Development develop(FittingSpec spec, DevelopContext ctx) {
+        if (spec instanceof PipeSpec pipe) {
+            return PipeDeveloper.develop(pipe, ctx);
+        }
+        if (spec instanceof ReducerSpec reducer) {
+            return ReducerDeveloper.develop(reducer, ctx);
+        }
+        throw new IllegalArgumentException("no development method for fitting type " + spec.type());
+    }
+}

@@ -1,0 +1,138 @@
+package dev.sheetwright.core.fitting;
+
+import dev.sheetwright.core.units.LengthUnit;
+import dev.sheetwright.core.units.Lengths;
+import java.util.Locale;
+
+/**
+ * Every default allowance width in one table (inches), and the reading of allowance words from a job file.
+ * All values are defaults a shop overrides in the job: its own roll-formers set the real numbers
+ * (trade-reference §7).
+ */
+public final class AllowanceTable {
+
+    // ---- The table (inches). Source beside each value. ----
+    /** Plain lap seam: 3/8-1/2 in on one edge (common practice; rule [S:NAVY ch.2]). */
+    static final double LAP_SEAM = 0.375;
+    /** Grooved seam lock width W; the seam takes 3W, half on each edge ([S:NAVY ch.2] [S:TALL]); W 1/4 in common practice. */
+    static final double GROOVE_LOCK = 0.25;
+    /** Pittsburgh lock: pocket edge about 1 in (common practice, trade-reference §7.2). */
+    static final double PITTSBURGH_POCKET = 1.0;
+    /** Pittsburgh lock: right-angle flange edge about 1/4 in (common practice, trade-reference §7.2). */
+    static final double PITTSBURGH_FLANGE = 0.25;
+    /** Button-punch snap lock, female (pocket) edge about 1 in (from memory; pocket >= 5/8 in [S:MH p.1445]). */
+    static final double SNAP_LOCK_FEMALE = 1.0;
+    /** Button-punch snap lock, male edge about 5/8 in (from memory, trade-reference §7.2). */
+    static final double SNAP_LOCK_MALE = 0.625;
+    /** Lap end (slip) allowance 1/2 in (common practice, trade-reference §7.3). */
+    static final double LAP_END = 0.5;
+    /** Bead allowance 3/8 in (from memory: bead about 1/4-3/8 in behind the crimp, trade-reference §7.4). */
+    static final double BEAD_END = 0.375;
+    /** Crimp length 1 1/4 in (from memory: 1 1/4-1 1/2 in, trade-reference §7.4). */
+    static final double CRIMP_END = 1.25;
+
+    private final LengthUnit unit;
+
+    private AllowanceTable(LengthUnit unit) {
+        this.unit = unit;
+    }
+
+    /** The table with its widths expressed in {@code unit}. */
+    public static AllowanceTable in(LengthUnit unit) {
+        return new AllowanceTable(unit);
+    }
+
+    private double inches(double value) {
+        return unit.convert(value, LengthUnit.INCH);
+    }
+
+    /** The seam used when a job gives none: a grooved (pipe-lock) seam with the default lock (common practice). */
+    public SeamAllowance defaultSeam() {
+        return seam(SeamKind.GROOVE, inches(GROOVE_LOCK));
+    }
+
+    /** A seam of the given kind with lock/lap width {@code w} (ignored where the kind has fixed widths). */
+    public SeamAllowance seam(SeamKind kind, double w) {
+        return switch (kind) {
+            case NONE, BUTT -> new SeamAllowance(kind, 0, 0);
+            case LAP -> new SeamAllowance(kind, w, 0);
+            case GROOVE -> new SeamAllowance(kind, 1.5 * w, 1.5 * w);
+            case PITTSBURGH -> new SeamAllowance(kind, inches(PITTSBURGH_POCKET), inches(PITTSBURGH_FLANGE));
+            case SNAP_LOCK -> new SeamAllowance(kind, inches(SNAP_LOCK_FEMALE), inches(SNAP_LOCK_MALE));
+        };
+    }
+
+    /**
+     * Reads a seam as written in a job: {@code none}, {@code butt}, {@code pittsburgh}, {@code snap-lock},
+     * {@code lap [W]}, {@code groove [W]} (W in the job's unit, fractions allowed).
+     */
+    public SeamAllowance parseSeam(String text) {
+        String[] words = split(text);
+        SeamKind kind = null;
+        for (SeamKind k : SeamKind.values()) {
+            if (k.word().equals(words[0])) {
+                kind = k;
+            }
+        }
+        if (kind == null) {
+            throw new IllegalArgumentException("unknown seam '" + text
+                    + "': use none, lap W, groove W, pittsburgh, snap-lock or butt");
+        }
+        boolean takesWidth = kind == SeamKind.LAP || kind == SeamKind.GROOVE;
+        if (!takesWidth && words.length > 1) {
+            throw new IllegalArgumentException("seam '" + words[0] + "' takes no width (got '" + text
+                    + "'); its widths come from the allowance table");
+        }
+        double w = words.length > 1 ? positive(words[1], text)
+                : kind == SeamKind.LAP ? inches(LAP_SEAM) : inches(GROOVE_LOCK);
+        return seam(kind, w);
+    }
+
+    /** Reads an end allowance: {@code none}, {@code lap [W]}, {@code bead [W]}, {@code crimp [W]}. */
+    public EndAllowance parseEnd(String text) {
+        String[] words = split(text);
+        EndKind kind = null;
+        for (EndKind k : EndKind.values()) {
+            if (k.word().equals(words[0])) {
+                kind = k;
+            }
+        }
+        if (kind == null) {
+            throw new IllegalArgumentException("unknown end allowance '" + text + "': use none, lap W, bead W or crimp W");
+        }
+        if (kind == EndKind.NONE) {
+            if (words.length > 1) {
+                throw new IllegalArgumentException("end allowance 'none' takes no width (got '" + text + "')");
+            }
+            return EndAllowance.NONE;
+        }
+        double w = words.length > 1 ? positive(words[1], text) : defaultEnd(kind);
+        return new EndAllowance(kind, w);
+    }
+
+    private double defaultEnd(EndKind kind) {
+        return switch (kind) {
+            case NONE -> 0;
+            case LAP -> inches(LAP_END);
+            case BEAD -> inches(BEAD_END);
+            case CRIMP -> inches(CRIMP_END);
+        };
+    }
+
+    private static String[] split(String text) {
+        String t = text == null ? "" : text.trim().toLowerCase(Locale.ROOT);
+        if (t.isEmpty()) {
+            throw new IllegalArgumentException("allowance must not be empty");
+        }
+        int space = t.indexOf(' ');
+        return space < 0 ? new String[] {t} : new String[] {t.substring(0, space), t.substring(space + 1).trim()};
+    }
+
+    private static double positive(String number, String text) {
+        double v = Lengths.parse(number);
+        if (!(v > 0)) {
+            throw new IllegalArgumentException("allowance width must be positive in '" + text + "'");
+        }
+        return v;
+    }
+}
