@@ -1,11 +1,14 @@
 package dev.sheetwright.cli;
 
-/** Entry point; the command tree is set up in {@link SheetwrightCommand}. */
+import picocli.CommandLine;
+
+/** Entry point: runs the command tree and exits with its code. Only this class calls {@code System.exit}. */
 public final class Main {
+
     private Main() {
     }
 
     public static void main(String[] args) {
-        System.exit(0);
+        System.exit(SheetwrightCommand.commandLine().execute(args));
     }
 }
