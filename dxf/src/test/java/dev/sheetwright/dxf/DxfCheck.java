@@ -21,10 +21,10 @@ import org.junit.jupiter.api.Assumptions;
  * <p>The shared folder is {@code $SHEETWRIGHT_SHARED} if set, else {@code ../shared} next to the repository root
  * (found by walking up from the working directory to the folder holding {@code .git}), else {@code /work/shared}.
  * Call {@link #requireAvailable()} first: when the checker, python or its modules are missing the test is skipped,
- * or fails when {@code SHEETWRIGHT_REQUIRE_EXTERNAL=1} (so CI cannot skip silently). Copy this class to use the
- * checker from another module.
+ * or fails when {@code SHEETWRIGHT_REQUIRE_EXTERNAL=1} (so CI cannot skip silently). Other modules use it through
+ * this module's test jar.
  */
-final class DxfCheck {
+public final class DxfCheck {
 
     static final String REQUIRE_EXTERNAL = "SHEETWRIGHT_REQUIRE_EXTERNAL";
     static final String SHARED = "SHEETWRIGHT_SHARED";
@@ -32,11 +32,11 @@ final class DxfCheck {
     private static final long TIMEOUT_SECONDS = 120;
 
     /** What one run printed: exit status, the parsed JSON summary from stdout, and stderr. */
-    record Result(int exitCode, Map<String, Object> summary, String stderr) {
+    public record Result(int exitCode, Map<String, Object> summary, String stderr) {
 
         /** The summary of the i-th file checked. */
         @SuppressWarnings("unchecked")
-        Map<String, Object> file(int i) {
+        public Map<String, Object> file(int i) {
             return ((List<Map<String, Object>>) summary.get("files")).get(i);
         }
     }
@@ -48,7 +48,7 @@ final class DxfCheck {
     }
 
     /** Skips the calling test when the checker cannot run, or fails it when external tools are required. */
-    static void requireAvailable() {
+    public static void requireAvailable() {
         String why = whyUnavailable();
         if (why == null) {
             return;
@@ -59,7 +59,7 @@ final class DxfCheck {
         Assumptions.abort("dxfcheck cannot run, test skipped: " + why);
     }
 
-    static Path sharedFolder() {
+    public static Path sharedFolder() {
         String env = System.getenv(SHARED);
         if (env != null && !env.isBlank()) {
             return Path.of(env).toAbsolutePath();
@@ -81,7 +81,7 @@ final class DxfCheck {
     }
 
     /** Runs {@code dxfcheck.py [options] files...}. */
-    static Result run(List<String> options, Path... files) {
+    public static Result run(List<String> options, Path... files) {
         List<String> command = new ArrayList<>(List.of(PYTHON.toString(), script().toString()));
         command.addAll(options);
         for (Path f : files) {

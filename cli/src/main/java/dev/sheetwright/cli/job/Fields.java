@@ -53,9 +53,9 @@ final class Fields {
         return fitting;
     }
 
-    /** The same fields, now known to belong to a fitting (for error messages). */
+    /** The same fields, now known to belong to a fitting: messages name the fitting and the field within it. */
     Fields forFitting(String id) {
-        return new Fields(file, id, prefix, map);
+        return new Fields(file, id, "", map);
     }
 
     String path(String key) {
