@@ -1,0 +1,234 @@
+package dev.sheetwright.nest.check;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.index.strtree.STRtree;
+import org.locationtech.jts.operation.distance.DistanceOp;
+
+import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.NestPiece;
+import dev.sheetwright.nest.model.NestRequest;
+import dev.sheetwright.nest.model.NestResult;
+import dev.sheetwright.nest.model.NestRules;
+import dev.sheetwright.nest.model.Placement;
+import dev.sheetwright.nest.model.Remnant;
+import dev.sheetwright.nest.model.Sheet;
+import dev.sheetwright.nest.model.SheetLayout;
+import dev.sheetwright.nest.model.Unplaced;
+
+/**
+ * Re-checks a nest by a route independent of the placer: the original (un-inflated) outlines are moved by each
+ * {@link Placement} and compared with JTS distance, overlay and covering operations; no no-fit polygons.
+ *
+ * <p>Like JTS's buffer result validator it may miss an error, but it never rejects a good result: lengths are
+ * compared with {@code linearTolerance}; with a gap of zero (touching allowed) two parts are accepted if their
+ * overlap area is at most {@code overlapFraction} times the total part area of the layout.
+ */
+public final class NestChecker {
+    /** Default linear tolerance, relative to the largest stock dimension. */
+    public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-7;
+    /** Default overlap allowance for gap 0: a fraction of the layout's part area (published layouts are rounded). */
+    public static final double DEFAULT_OVERLAP_FRACTION = 1e-5;
+    private static final double ANGLE_TOLERANCE_DEG = 1e-6;
+
+    private final NestRequest request;
+    private final double linearTolerance;
+    private final double overlapFraction;
+    private final Map<String, NestPiece> byLabel = new HashMap<>();
+
+    public NestChecker(NestRequest request, double linearTolerance, double overlapFraction) {
+        if (request == null) {
+            throw new IllegalArgumentException("request must not be null");
+        }
+        if (!(linearTolerance >= 0) || Double.isInfinite(linearTolerance)) {
+            throw new IllegalArgumentException("linearTolerance must be finite and >= 0, got " + linearTolerance);
+        }
+        if (!(overlapFraction >= 0 && overlapFraction < 1)) {
+            throw new IllegalArgumentException("overlapFraction must be in [0, 1), got " + overlapFraction);
+        }
+        this.request = request;
+        this.linearTolerance = linearTolerance;
+        this.overlapFraction = overlapFraction;
+        for (NestPiece p : request.pieces()) {
+            byLabel.put(p.label(), p);
+        }
+    }
+
+    /** Checks with the default tolerances; an empty list means no violation was found. */
+    public static List<Violation> check(NestRequest request, NestResult result) {
+        double scale = 1;
+        for (var s : request.stock()) {
+            if (s instanceof Sheet sh) {
+                scale = Math.max(scale, Math.max(sh.width(), sh.height()));
+            } else if (s instanceof Coil c) {
+                scale = Math.max(scale, c.width());
+            } else {
+                Envelope e = ((Remnant) s).outline().getEnvelopeInternal();
+                scale = Math.max(scale, Math.max(e.getWidth(), e.getHeight()));
+            }
+        }
+        for (SheetLayout l : result.sheets()) {
+            scale = Math.max(scale, l.usedLength());
+        }
+        return new NestChecker(request, scale * DEFAULT_RELATIVE_TOLERANCE, DEFAULT_OVERLAP_FRACTION).check(result);
+    }
+
+    public List<Violation> check(NestResult result) {
+        if (result == null) {
+            throw new IllegalArgumentException("result must not be null");
+        }
+        List<Violation> out = new ArrayList<>();
+        checkAccounting(result, out);
+        for (SheetLayout layout : result.sheets()) {
+            checkLayout(layout, out);
+        }
+        return out;
+    }
+
+    private void checkAccounting(NestResult result, List<Violation> out) {
+        Map<String, int[]> seen = new HashMap<>();
+        for (NestPiece p : request.pieces()) {
+            seen.put(p.label(), new int[p.copies()]);
+        }
+        for (SheetLayout l : result.sheets()) {
+            for (Placement p : l.parts()) {
+                count(seen, p.label(), p.copy(), "placed on layout " + l.index(), out);
+            }
+        }
+        for (Unplaced u : result.unplaced()) {
+            count(seen, u.label(), u.copy(), "listed as unplaced", out);
+        }
+        for (NestPiece p : request.pieces()) {
+            int[] c = seen.get(p.label());
+            for (int i = 0; i < c.length; i++) {
+                if (c[i] == 0) {
+                    out.add(new Violation(Violation.Kind.MISSING, "copy " + i + " of " + p.label() + " is neither placed nor listed as unplaced"));
+                } else if (c[i] > 1) {
+                    out.add(new Violation(Violation.Kind.DUPLICATE, "copy " + i + " of " + p.label() + " appears " + c[i] + " times"));
+                }
+            }
+        }
+    }
+
+    private static void count(Map<String, int[]> seen, String label, int copy, String where, List<Violation> out) {
+        int[] c = seen.get(label);
+        if (c == null) {
+            out.add(new Violation(Violation.Kind.UNKNOWN_PIECE, label + " (" + where + ") is not in the request"));
+        } else if (copy >= c.length) {
+            out.add(new Violation(Violation.Kind.UNKNOWN_PIECE, "copy " + copy + " of " + label + " (" + where
+                    + ") is out of range 0.." + (c.length - 1)));
+        } else {
+            c[copy]++;
+        }
+    }
+
+    private void checkLayout(SheetLayout layout, List<Violation> out) {
+        NestRules rules = request.rules();
+        List<Polygon> shapes = new ArrayList<>();
+        List<Placement> placed = new ArrayList<>();
+        double partArea = 0;
+        for (Placement p : layout.parts()) {
+            NestPiece piece = byLabel.get(p.label());
+            if (piece == null) {
+                continue;
+            }
+            if (!rules.rotation().allows(p.rotationDeg(), ANGLE_TOLERANCE_DEG)) {
+                out.add(new Violation(Violation.Kind.ROTATION, where(layout, p) + " is rotated " + fmt(p.rotationDeg())
+                        + " deg, not allowed by " + rules.rotation()));
+            }
+            if (p.mirrored() && !rules.mirror()) {
+                out.add(new Violation(Violation.Kind.MIRROR, where(layout, p) + " is mirrored, but mirroring is not allowed"));
+            }
+            Polygon shape = p.apply(piece.shape());
+            shapes.add(shape);
+            placed.add(p);
+            partArea += shape.getArea();
+            checkInside(layout, p, shape, out);
+        }
+        STRtree tree = new STRtree();
+        double reach = Math.max(rules.gap(), 0);
+        for (int i = 0; i < shapes.size(); i++) {
+            Envelope e = new Envelope(shapes.get(i).getEnvelopeInternal());
+            e.expandBy(reach);
+            tree.insert(e, i);
+        }
+        double allowedOverlap = overlapFraction * partArea;
+        for (int i = 0; i < shapes.size(); i++) {
+            Polygon a = shapes.get(i);
+            @SuppressWarnings("unchecked")
+            List<Integer> near = tree.query(a.getEnvelopeInternal());
+            for (int j : near) {
+                if (j <= i) {
+                    continue;
+                }
+                Polygon b = shapes.get(j);
+                if (rules.gap() > linearTolerance) {
+                    double d = DistanceOp.distance(a, b);
+                    if (d < rules.gap() - linearTolerance) {
+                        boolean overlap = d == 0 && a.intersects(b);
+                        out.add(new Violation(overlap ? Violation.Kind.OVERLAP : Violation.Kind.TOO_CLOSE,
+                                where(layout, placed.get(i)) + " and " + placed.get(j).label() + " copy " + placed.get(j).copy()
+                                        + " are " + fmt(d) + " apart, gap is " + fmt(rules.gap())));
+                    }
+                } else if (a.intersects(b)) {
+                    double area = a.intersection(b).getArea();
+                    if (area > allowedOverlap) {
+                        out.add(new Violation(Violation.Kind.OVERLAP, where(layout, placed.get(i)) + " overlaps "
+                                + placed.get(j).label() + " copy " + placed.get(j).copy() + " by area " + fmt(area)
+                                + " (allowed " + fmt(allowedOverlap) + ")"));
+                    }
+                }
+            }
+        }
+    }
+
+    private void checkInside(SheetLayout layout, Placement p, Polygon shape, List<Violation> out) {
+        double m = request.rules().margin();
+        double tol = linearTolerance;
+        Envelope e = shape.getEnvelopeInternal();
+        if (layout.stock() instanceof Sheet sh) {
+            if (e.getMinX() < m - tol || e.getMinY() < m - tol || e.getMaxX() > sh.width() - m + tol || e.getMaxY() > sh.height() - m + tol) {
+                out.add(new Violation(m > 0 ? Violation.Kind.MARGIN : Violation.Kind.OUTSIDE_STOCK, where(layout, p)
+                        + " spans x " + fmt(e.getMinX()) + ".." + fmt(e.getMaxX()) + ", y " + fmt(e.getMinY()) + ".." + fmt(e.getMaxY())
+                        + "; must stay within x " + fmt(m) + ".." + fmt(sh.width() - m) + ", y " + fmt(m) + ".." + fmt(sh.height() - m)));
+            }
+        } else if (layout.stock() instanceof Coil c) {
+            if (e.getMinX() < m - tol || e.getMinY() < m - tol || e.getMaxY() > c.width() - m + tol) {
+                out.add(new Violation(m > 0 ? Violation.Kind.MARGIN : Violation.Kind.OUTSIDE_STOCK, where(layout, p)
+                        + " spans x from " + fmt(e.getMinX()) + ", y " + fmt(e.getMinY()) + ".." + fmt(e.getMaxY())
+                        + "; must stay within x >= " + fmt(m) + ", y " + fmt(m) + ".." + fmt(c.width() - m)));
+            }
+            if (e.getMaxX() > layout.usedLength() - m + tol) {
+                out.add(new Violation(Violation.Kind.COIL_LENGTH, where(layout, p) + " reaches x " + fmt(e.getMaxX())
+                        + " beyond the used coil length " + fmt(layout.usedLength()) + " less margin " + fmt(m)));
+            }
+        } else {
+            Remnant r = (Remnant) layout.stock();
+            Geometry grown = r.outline().buffer(tol);
+            if (!grown.covers(shape)) {
+                out.add(new Violation(Violation.Kind.OUTSIDE_STOCK, where(layout, p) + " is not inside remnant " + r.id()));
+            } else if (m > 0) {
+                double d = DistanceOp.distance(shape, r.outline().getBoundary());
+                if (d < m - tol) {
+                    out.add(new Violation(Violation.Kind.MARGIN, where(layout, p) + " is " + fmt(d) + " from the edge of remnant "
+                            + r.id() + ", margin is " + fmt(m)));
+                }
+            }
+        }
+    }
+
+    private static String where(SheetLayout layout, Placement p) {
+        return p.label() + " copy " + p.copy() + " on layout " + layout.index();
+    }
+
+    private static String fmt(double v) {
+        return String.format(Locale.ROOT, "%.6g", v);
+    }
+}

@@ -1,0 +1,41 @@
+package dev.sheetwright.nest.model;
+
+import java.time.Duration;
+import java.util.OptionalLong;
+
+/**
+ * How long to search. With {@code iterations} present the search runs exactly that many improvement steps
+ * (split over the threads) and the result depends only on the request, the seed and the iteration count;
+ * otherwise it runs until {@code timeLimit} is spent.
+ */
+public record NestOptions(Duration timeLimit, OptionalLong iterations, long seed, int threads, ProgressListener listener) {
+    public NestOptions {
+        Checks.requireNonNull("timeLimit", timeLimit);
+        if (timeLimit.isNegative()) {
+            throw new IllegalArgumentException("timeLimit must be >= 0, got " + timeLimit);
+        }
+        Checks.requireNonNull("iterations", iterations);
+        if (iterations.isPresent() && iterations.getAsLong() < 0) {
+            throw new IllegalArgumentException("iterations must be >= 0, got " + iterations.getAsLong());
+        }
+        if (threads < 1 || threads > 64) {
+            throw new IllegalArgumentException("threads must be in 1..64, got " + threads);
+        }
+        Checks.requireNonNull("listener", listener);
+    }
+
+    /** Run for a time, on {@code threads} threads. */
+    public static NestOptions timed(Duration timeLimit, long seed, int threads) {
+        return new NestOptions(timeLimit, OptionalLong.empty(), seed, threads, ProgressListener.NONE);
+    }
+
+    /** Run exactly {@code iterations} steps: reproducible. */
+    public static NestOptions steps(long iterations, long seed, int threads) {
+        return new NestOptions(Duration.ofDays(1), OptionalLong.of(iterations), seed, threads, ProgressListener.NONE);
+    }
+
+    /** Only the constructive pass, no improvement search. */
+    public static NestOptions constructiveOnly() {
+        return steps(0, 0, 1);
+    }
+}

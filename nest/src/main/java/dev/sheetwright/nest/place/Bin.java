@@ -1,0 +1,144 @@
+package dev.sheetwright.nest.place;
+
+import java.util.Arrays;
+
+/**
+ * One opened piece of stock and the parts on it so far (append-only with undo). Finds the bottom-left-most
+ * feasible position of an orientation from the no-fit polygons of the parts already placed.
+ */
+final class Bin {
+    final Slot slot;
+    int count;
+    int[] orient = new int[16];
+    int[] instance = new int[16];
+    double[] tx = new double[16];
+    double[] ty = new double[16];
+    /** Prefix maximum of the spacing shape's far edge along the primary axis (index i = after i+1 parts). */
+    double[] frontier = new double[16];
+    double[] areaPrefix = new double[16];
+    /** failCount[type] = number of parts present when that type was found not to fit; -1 if unknown. */
+    int[] failCount;
+
+    Bin(Slot slot, int types) {
+        this.slot = slot;
+        failCount = new int[types];
+        Arrays.fill(failCount, -1);
+    }
+
+    double frontier() {
+        return count == 0 ? Double.NEGATIVE_INFINITY : frontier[count - 1];
+    }
+
+    double partArea() {
+        return count == 0 ? 0 : areaPrefix[count - 1];
+    }
+
+    void add(Orientation o, int inst, double x, double y, double area) {
+        if (count == orient.length) {
+            int n = count * 2;
+            orient = Arrays.copyOf(orient, n);
+            instance = Arrays.copyOf(instance, n);
+            tx = Arrays.copyOf(tx, n);
+            ty = Arrays.copyOf(ty, n);
+            frontier = Arrays.copyOf(frontier, n);
+            areaPrefix = Arrays.copyOf(areaPrefix, n);
+        }
+        orient[count] = o.id;
+        instance[count] = inst;
+        tx[count] = x;
+        ty[count] = y;
+        double far = slot.alongX ? x + o.sMaxX : y + o.sMaxY;
+        frontier[count] = count == 0 ? far : Math.max(frontier[count - 1], far);
+        areaPrefix[count] = (count == 0 ? 0 : areaPrefix[count - 1]) + area;
+        count++;
+    }
+
+    void removeLast() {
+        count--;
+        for (int t = 0; t < failCount.length; t++) {
+            if (failCount[t] > count) {
+                failCount[t] = -1;
+            }
+        }
+    }
+
+    /** Result of a search: reference position and its keys (far edge along the primary axis, then the other). */
+    static final class Position {
+        double x;
+        double y;
+        double key1;
+        double key2;
+        Orientation orientation;
+    }
+
+    /**
+     * The feasible position of {@code o} with the smallest (primary, secondary) reference coordinates, or false
+     * if there is none. Writes into {@code out}.
+     */
+    boolean bottomLeft(Orientation o, Nfp.Cache cache, double eps, Scratch s, Position out) {
+        double ix0 = slot.cx0 - o.bMinX;
+        double iy0 = slot.cy0 - o.bMinY;
+        double ix1;
+        double iy1 = slot.cy1 - o.bMaxY;
+        if (slot.unlimitedLength) {
+            ix1 = count == 0 ? ix0 : Math.max(ix0, frontier() - o.sMinX);
+        } else {
+            ix1 = slot.cx1 - o.bMaxX;
+        }
+        if (ix0 > ix1 + eps || iy0 > iy1 + eps) {
+            return false;
+        }
+        ix1 = Math.max(ix0, ix1);
+        iy1 = Math.max(iy0, iy1);
+        boolean alongX = slot.alongX;
+
+        // gather translated convex pieces that reach into the inner-fit rectangle
+        s.clearPieces();
+        for (int k = 0; k < count; k++) {
+            Nfp nfp = cache.get(orient[k], o.id);
+            double px = tx[k];
+            double py = ty[k];
+            if (nfp.minX + px >= ix1 - eps || nfp.maxX + px <= ix0 + eps || nfp.minY + py >= iy1 - eps || nfp.maxY + py <= iy0 + eps) {
+                // touches the rectangle at most on its boundary: only matters if the rectangle is degenerate
+                if (!(ix1 - ix0 <= eps || iy1 - iy0 <= eps)) {
+                    continue;
+                }
+            }
+            for (ConvexPolygon c : nfp.parts) {
+                if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
+                    s.addPiece(c, px, py);
+                }
+            }
+        }
+        if (slot.obstacles.length > 0) {
+            for (ConvexPolygon c : slot.obstacleNfp(o).parts) {
+                if (c.minX < ix1 + eps && c.maxX > ix0 - eps && c.minY < iy1 + eps && c.maxY > iy0 - eps) {
+                    s.addPiece(c, 0, 0);
+                }
+            }
+        }
+        s.buildGrid(ix0, iy0, ix1, iy1);
+        s.clearCandidates();
+        s.addCandidate(ix0, iy0);
+        s.addCandidate(ix1, iy0);
+        s.addCandidate(ix0, iy1);
+        s.addCandidate(ix1, iy1);
+        s.collectVerticesAndBorderHits(ix0, iy0, ix1, iy1, eps);
+        s.collectIntersections(ix0, iy0, ix1, iy1, eps);
+        int best = s.firstFeasible(alongX, eps);
+        if (best < 0) {
+            return false;
+        }
+        out.x = s.cx[best];
+        out.y = s.cy[best];
+        out.orientation = o;
+        if (alongX) {
+            out.key1 = out.x + o.bMaxX;
+            out.key2 = out.y + o.bMinY;
+        } else {
+            out.key1 = out.y + o.bMaxY;
+            out.key2 = out.x + o.bMinX;
+        }
+        return true;
+    }
+}

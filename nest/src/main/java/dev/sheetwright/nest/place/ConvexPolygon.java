@@ -1,0 +1,143 @@
+package dev.sheetwright.nest.place;
+
+import java.util.Arrays;
+
+/**
+ * An immutable convex polygon, counter-clockwise, with outward unit edge normals for fast point tests.
+ * Package-private working type of the placer.
+ */
+final class ConvexPolygon {
+    final double[] xs;
+    final double[] ys;
+    /** Outward unit normal and offset of edge i (from vertex i to i+1): n . p = c on the edge. */
+    final double[] nx;
+    final double[] ny;
+    final double[] c;
+    final double minX;
+    final double minY;
+    final double maxX;
+    final double maxY;
+
+    private ConvexPolygon(double[] xs, double[] ys) {
+        this.xs = xs;
+        this.ys = ys;
+        int n = xs.length;
+        nx = new double[n];
+        ny = new double[n];
+        c = new double[n];
+        double x0 = Double.POSITIVE_INFINITY;
+        double y0 = Double.POSITIVE_INFINITY;
+        double x1 = Double.NEGATIVE_INFINITY;
+        double y1 = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < n; i++) {
+            int j = (i + 1) % n;
+            double ex = xs[j] - xs[i];
+            double ey = ys[j] - ys[i];
+            double len = Math.hypot(ex, ey);
+            nx[i] = ey / len;
+            ny[i] = -ex / len;
+            c[i] = nx[i] * xs[i] + ny[i] * ys[i];
+            x0 = Math.min(x0, xs[i]);
+            y0 = Math.min(y0, ys[i]);
+            x1 = Math.max(x1, xs[i]);
+            y1 = Math.max(y1, ys[i]);
+        }
+        minX = x0;
+        minY = y0;
+        maxX = x1;
+        maxY = y1;
+    }
+
+    int size() {
+        return xs.length;
+    }
+
+    /** Whether (px, py) - (tx, ty) lies deeper than {@code eps} inside this polygon. */
+    boolean containsStrictly(double px, double py, double tx, double ty, double eps) {
+        double x = px - tx;
+        double y = py - ty;
+        if (x <= minX + eps || x >= maxX - eps || y <= minY + eps || y >= maxY - eps) {
+            return false;
+        }
+        for (int i = 0; i < nx.length; i++) {
+            if (nx[i] * x + ny[i] * y - c[i] > -eps) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    double area() {
+        double a = 0;
+        int n = xs.length;
+        for (int i = 0; i < n; i++) {
+            int j = (i + 1) % n;
+            a += xs[i] * ys[j] - xs[j] * ys[i];
+        }
+        return a / 2;
+    }
+
+    /**
+     * Convex hull of the points (Andrew's monotone chain), collinear points dropped. Returns null when the hull
+     * has no area.
+     */
+    static ConvexPolygon hull(double[] px, double[] py, int count) {
+        Integer[] idx = new Integer[count];
+        for (int i = 0; i < count; i++) {
+            idx[i] = i;
+        }
+        Arrays.sort(idx, (a, b) -> px[a] != px[b] ? Double.compare(px[a], px[b]) : Double.compare(py[a], py[b]));
+        int[] h = new int[2 * count + 1];
+        int k = 0;
+        for (int t = 0; t < count; t++) {
+            int i = idx[t];
+            while (k >= 2 && cross(px, py, h[k - 2], h[k - 1], i) <= 0) {
+                k--;
+            }
+            h[k++] = i;
+        }
+        for (int t = count - 2, lower = k + 1; t >= 0; t--) {
+            int i = idx[t];
+            while (k >= lower && cross(px, py, h[k - 2], h[k - 1], i) <= 0) {
+                k--;
+            }
+            h[k++] = i;
+        }
+        int n = k - 1;
+        if (n < 3) {
+            return null;
+        }
+        double[] xs = new double[n];
+        double[] ys = new double[n];
+        for (int i = 0; i < n; i++) {
+            xs[i] = px[h[i]];
+            ys[i] = py[h[i]];
+        }
+        ConvexPolygon p = new ConvexPolygon(xs, ys);
+        return p.area() > 0 ? p : null;
+    }
+
+    private static double cross(double[] px, double[] py, int o, int a, int b) {
+        return (px[a] - px[o]) * (py[b] - py[o]) - (py[a] - py[o]) * (px[b] - px[o]);
+    }
+
+    /** Minkowski sum this + (-other): the positions of other's origin where the two interiors overlap. */
+    ConvexPolygon minusSum(ConvexPolygon other) {
+        int n = xs.length * other.xs.length;
+        double[] px = new double[n];
+        double[] py = new double[n];
+        int k = 0;
+        for (int i = 0; i < xs.length; i++) {
+            for (int j = 0; j < other.xs.length; j++) {
+                px[k] = xs[i] - other.xs[j];
+                py[k] = ys[i] - other.ys[j];
+                k++;
+            }
+        }
+        return hull(px, py, n);
+    }
+
+    static ConvexPolygon of(double[] xs, double[] ys) {
+        return hull(xs, ys, xs.length);
+    }
+}

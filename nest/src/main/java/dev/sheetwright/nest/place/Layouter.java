@@ -1,0 +1,232 @@
+package dev.sheetwright.nest.place;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.Remnant;
+import dev.sheetwright.nest.model.Sheet;
+
+/**
+ * Places copies one after another in a given order (first fit over the opened stock, bottom-left on each, every
+ * allowed orientation tried), and can undo back to any step so that a changed order is only re-placed from the
+ * first changed position.
+ */
+final class Layouter {
+    final Problem pb;
+    private final Scratch scratch = new Scratch();
+    private final Bin.Position pos = new Bin.Position();
+    private final Bin.Position best = new Bin.Position();
+    final List<Bin> bins = new ArrayList<>();
+    private final int[] slotUsed;
+    private int steps;
+    private final int[] evBin;
+    private final boolean[] evNew;
+    final int[] evInst;
+
+    Layouter(Problem pb) {
+        this.pb = pb;
+        slotUsed = new int[pb.slots.size()];
+        int n = pb.instType.length;
+        evBin = new int[n];
+        evNew = new boolean[n];
+        evInst = new int[n];
+    }
+
+    int steps() {
+        return steps;
+    }
+
+    void rollback(int step) {
+        while (steps > step) {
+            steps--;
+            int b = evBin[steps];
+            if (b >= 0) {
+                Bin bin = bins.get(b);
+                bin.removeLast();
+                if (evNew[steps]) {
+                    bins.remove(b);
+                    slotUsed[bin.slot.index]--;
+                }
+            }
+        }
+    }
+
+    void run(int[] order, int from) {
+        rollback(from);
+        for (int i = from; i < order.length; i++) {
+            placeOne(order[i]);
+        }
+    }
+
+    private void placeOne(int inst) {
+        int t = pb.instType[inst];
+        evInst[steps] = inst;
+        evNew[steps] = false;
+        evBin[steps] = -1;
+        if (pb.tooLarge[t] == null) {
+            for (int b = 0; b < bins.size(); b++) {
+                Bin bin = bins.get(b);
+                if (bin.failCount[t] >= 0) {
+                    continue;
+                }
+                if (!bin.slot.unlimitedLength
+                        && (bin.slot.cx1 - bin.slot.cx0) * (bin.slot.cy1 - bin.slot.cy0) - bin.partArea() < pb.typeArea[t]) {
+                    continue;
+                }
+                if (tryBin(bin, t)) {
+                    commit(bin, b, inst, false);
+                    return;
+                }
+                bin.failCount[t] = bin.count;
+            }
+            for (Slot slot : pb.slots) {
+                if (slotUsed[slot.index] >= slot.limit) {
+                    continue;
+                }
+                Bin bin = new Bin(slot, pb.types.size());
+                if (tryBin(bin, t)) {
+                    bins.add(bin);
+                    slotUsed[slot.index]++;
+                    commit(bin, bins.size() - 1, inst, true);
+                    return;
+                }
+            }
+        }
+        steps++;
+    }
+
+    private void commit(Bin bin, int b, int inst, boolean isNew) {
+        Orientation o = best.orientation;
+        bin.add(o, inst, best.x, best.y, pb.typeArea[o.type]);
+        evBin[steps] = b;
+        evNew[steps] = isNew;
+        steps++;
+    }
+
+    private boolean tryBin(Bin bin, int t) {
+        boolean found = false;
+        for (Orientation o : pb.orientationsByType.get(t)) {
+            if (!bin.slot.boxFits(o, pb.eps)) {
+                continue;
+            }
+            if (bin.bottomLeft(o, pb.cache, pb.eps, scratch, pos)) {
+                if (!found || pos.key1 < best.key1 || (pos.key1 == best.key1 && pos.key2 < best.key2)) {
+                    best.x = pos.x;
+                    best.y = pos.y;
+                    best.key1 = pos.key1;
+                    best.key2 = pos.key2;
+                    best.orientation = pos.orientation;
+                    found = true;
+                }
+            }
+        }
+        return found;
+    }
+
+    /** Far edge of the part bodies along the bin's primary axis, relative to the stock origin. */
+    double usedExtent(Bin bin) {
+        double m = -Double.MAX_VALUE;
+        for (int k = 0; k < bin.count; k++) {
+            Orientation o = pb.orientations.get(bin.orient[k]);
+            m = Math.max(m, bin.slot.alongX ? bin.tx[k] + o.bMaxX : bin.ty[k] + o.bMaxY);
+        }
+        return bin.count == 0 ? 0 : m;
+    }
+
+    /** Objective of the current layout. */
+    Score score() {
+        int unplaced = 0;
+        for (int i = 0; i < steps; i++) {
+            if (evBin[i] < 0) {
+                unplaced++;
+            }
+        }
+        double cost = 0;
+        double area = 0;
+        double last = 0;
+        double margin = pb.request.rules().margin();
+        for (int b = 0; b < bins.size(); b++) {
+            Bin bin = bins.get(b);
+            double used = usedExtent(bin);
+            if (bin.slot.stock instanceof Sheet s) {
+                cost += s.cost();
+                area += s.width() * s.height();
+            } else if (bin.slot.stock instanceof Coil c) {
+                double len = Math.max(0, used + margin);
+                cost += c.costPerLength() * len;
+                area += c.width() * len;
+            } else {
+                Remnant r = (Remnant) bin.slot.stock;
+                cost += r.cost();
+                area += r.outline().getArea();
+            }
+            if (b == bins.size() - 1) {
+                last = used;
+            }
+        }
+        return new Score(unplaced, bins.size(), cost, area, last);
+    }
+
+    /** Copy of the current layout. */
+    Solution snapshot(Score score) {
+        List<Solution.BinPlan> plans = new ArrayList<>();
+        for (Bin bin : bins) {
+            plans.add(new Solution.BinPlan(bin.slot, Arrays.copyOf(bin.instance, bin.count), Arrays.copyOf(bin.orient, bin.count),
+                    Arrays.copyOf(bin.tx, bin.count), Arrays.copyOf(bin.ty, bin.count), usedExtent(bin)));
+        }
+        List<Integer> unplaced = new ArrayList<>();
+        for (int i = 0; i < steps; i++) {
+            if (evBin[i] < 0) {
+                unplaced.add(evInst[i]);
+            }
+        }
+        return new Solution(plans, unplaced, score);
+    }
+
+    /** Lexicographic objective: unplaced copies, stock cost, stock area, then length used on the last stock. */
+    record Score(int unplaced, int bins, double cost, double area, double lastLength) {
+        boolean betterThan(Score o) {
+            return compare(o) < 0;
+        }
+
+        int compare(Score o) {
+            if (unplaced != o.unplaced) {
+                return Integer.compare(unplaced, o.unplaced);
+            }
+            int c = cmp(cost, o.cost);
+            if (c != 0) {
+                return c;
+            }
+            c = cmp(area, o.area);
+            if (c != 0) {
+                return c;
+            }
+            c = Integer.compare(bins, o.bins);
+            if (c != 0) {
+                return c;
+            }
+            return Double.compare(lastLength, o.lastLength);
+        }
+
+        private static int cmp(double a, double b) {
+            double tol = 1e-12 * Math.max(Math.abs(a), Math.abs(b));
+            return a < b - tol ? -1 : a > b + tol ? 1 : 0;
+        }
+
+        /** Threshold acceptance: not worse in count terms, and cost and last length within a factor 1 + t. */
+        boolean acceptableAgainst(Score cur, double t) {
+            if (unplaced != cur.unplaced) {
+                return unplaced < cur.unplaced;
+            }
+            if (bins != cur.bins) {
+                return bins < cur.bins && cost <= cur.cost * (1 + t) + 1e-12;
+            }
+            if (cost > cur.cost * (1 + t) + 1e-12) {
+                return false;
+            }
+            return cost < cur.cost || lastLength <= cur.lastLength + t * Math.abs(cur.lastLength);
+        }
+    }
+}

@@ -1,0 +1,248 @@
+package dev.sheetwright.nest.place;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.operation.buffer.BufferOp;
+import org.locationtech.jts.operation.buffer.BufferParameters;
+import org.locationtech.jts.simplify.TopologyPreservingSimplifier;
+
+import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.NestPiece;
+import dev.sheetwright.nest.model.NestRequest;
+import dev.sheetwright.nest.model.NestRules;
+import dev.sheetwright.nest.model.Remnant;
+import dev.sheetwright.nest.model.Sheet;
+import dev.sheetwright.nest.model.Stock;
+
+/** A request prepared for placing: orientations with convex pieces, stock slots, copies, tolerance. */
+final class Problem {
+    /** Outlines with more vertices than this are simplified (conservatively, outward) before decomposition. */
+    static final int SIMPLIFY_ABOVE_VERTICES = 48;
+    /** Relative size of that simplification, times the outline's bounding-box diagonal. */
+    static final double SIMPLIFY_FRACTION = 1e-3;
+
+    final NestRequest request;
+    final List<NestPiece> types;
+    final List<List<Orientation>> orientationsByType = new ArrayList<>();
+    final List<Orientation> orientations = new ArrayList<>();
+    final double[] typeArea;
+    /** instance i = (type, copy) */
+    final int[] instType;
+    final int[] instCopy;
+    final List<Slot> slots = new ArrayList<>();
+    /** null when the type fits at least one slot; else why not. */
+    final String[] tooLarge;
+    final double eps;
+    final Nfp.Cache cache;
+
+    Problem(NestRequest request) {
+        this.request = request;
+        this.types = request.pieces();
+        NestRules rules = request.rules();
+        double scale = 1;
+        for (Stock s : request.stock()) {
+            scale = Math.max(scale, stockScale(s));
+        }
+        for (NestPiece p : types) {
+            Envelope e = p.shape().getEnvelopeInternal();
+            scale = Math.max(scale, Math.max(Math.abs(e.getMinX()), Math.abs(e.getMaxX())));
+            scale = Math.max(scale, Math.max(Math.abs(e.getMinY()), Math.abs(e.getMaxY())));
+        }
+        eps = scale * 1e-9;
+        typeArea = new double[types.size()];
+        List<Double> angles = rules.rotation().candidateAngles();
+        for (int t = 0; t < types.size(); t++) {
+            Polygon shape = types.get(t).shape();
+            typeArea[t] = shape.getArea();
+            List<ConvexPolygon> spacing = ConvexDecomposer.decompose(inflate(shape, rules.gap() / 2 + rules.chordTolerance()));
+            List<ConvexPolygon> body = rules.gap() == 0 ? spacing
+                    : ConvexDecomposer.decompose(inflate(shape, rules.chordTolerance()));
+            List<Orientation> list = new ArrayList<>();
+            for (int m = 0; m < (rules.mirror() ? 2 : 1); m++) {
+                for (double a : angles) {
+                    Orientation o = new Orientation(orientations.size(), t, a, m == 1,
+                            Orientation.transform(spacing, a, m == 1), Orientation.transform(body, a, m == 1));
+                    orientations.add(o);
+                    list.add(o);
+                }
+            }
+            orientationsByType.add(list);
+        }
+        int total = request.totalCopies();
+        instType = new int[total];
+        instCopy = new int[total];
+        int i = 0;
+        for (int t = 0; t < types.size(); t++) {
+            for (int c = 0; c < types.get(t).copies(); c++) {
+                instType[i] = t;
+                instCopy[i] = c;
+                i++;
+            }
+        }
+        buildSlots(rules);
+        cache = new Nfp.Cache(orientations);
+        tooLarge = new String[types.size()];
+        for (int t = 0; t < types.size(); t++) {
+            tooLarge[t] = fitsSomewhere(t) ? null : tooLargeReason(t, rules.margin());
+        }
+    }
+
+    private static double stockScale(Stock s) {
+        if (s instanceof Sheet sh) {
+            return Math.max(sh.width(), sh.height());
+        } else if (s instanceof Coil c) {
+            return c.width();
+        }
+        Envelope e = ((Remnant) s).outline().getEnvelopeInternal();
+        return Math.max(Math.max(Math.abs(e.getMinX()), Math.abs(e.getMaxX())), Math.max(Math.abs(e.getMinY()), Math.abs(e.getMaxY())));
+    }
+
+    /**
+     * Outward offset that contains the true offset: mitred joins (a mitre limit bevel still lies outside the round
+     * offset); long outlines are first simplified by s and then grown by s more, which covers the original.
+     */
+    static Geometry inflate(Polygon shape, double d) {
+        Geometry g = shape;
+        if (shape.getNumPoints() > SIMPLIFY_ABOVE_VERTICES) {
+            Envelope e = shape.getEnvelopeInternal();
+            double s = SIMPLIFY_FRACTION * Math.hypot(e.getWidth(), e.getHeight());
+            g = TopologyPreservingSimplifier.simplify(shape, s);
+            d += s;
+        }
+        if (d <= 0) {
+            return g;
+        }
+        BufferParameters bp = new BufferParameters(8, BufferParameters.CAP_FLAT, BufferParameters.JOIN_MITRE, 4.0);
+        return BufferOp.bufferOp(g, d, bp);
+    }
+
+    private void buildSlots(NestRules rules) {
+        double m = rules.margin();
+        List<Slot> unordered = new ArrayList<>();
+        List<Double> rank = new ArrayList<>();
+        GeometryFactory gf = new GeometryFactory();
+        for (Stock s : request.stock()) {
+            int idx = unordered.size();
+            if (s instanceof Sheet sh) {
+                unordered.add(new Slot(idx, s, m, m, sh.width() - m, sh.height() - m, false, sh.width() >= sh.height(),
+                        List.of(), sh.count().orElse(Integer.MAX_VALUE)));
+                rank.add(1 + sh.cost() / (sh.width() * sh.height()));
+            } else if (s instanceof Coil c) {
+                unordered.add(new Slot(idx, s, m, m, Double.POSITIVE_INFINITY, c.width() - m, true, true, List.of(), 1));
+                rank.add(1 + c.costPerLength() / c.width());
+            } else {
+                Remnant r = (Remnant) s;
+                Geometry inner = r.outline();
+                if (m > 0) {
+                    // erode by slightly more than m so the chords of the rounded corners stay m away
+                    double d = m / Math.cos(Math.PI / 32);
+                    inner = r.outline().buffer(-d, 8);
+                }
+                if (inner.isEmpty()) {
+                    continue;
+                }
+                Envelope e = inner.getEnvelopeInternal();
+                Geometry box = gf.toGeometry(e);
+                Geometry outside = box.difference(inner);
+                List<ConvexPolygon> obstacles = outside.isEmpty() ? List.of() : ConvexDecomposer.decompose(polygonal(outside));
+                unordered.add(new Slot(idx, s, e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY(), false,
+                        e.getWidth() >= e.getHeight(), obstacles, 1));
+                rank.add(0.0);
+            }
+        }
+        List<Integer> ord = new ArrayList<>();
+        for (int i = 0; i < unordered.size(); i++) {
+            ord.add(i);
+        }
+        ord.sort(Comparator.comparingDouble(rank::get));
+        for (int i : ord) {
+            Slot u = unordered.get(i);
+            slots.add(new Slot(slots.size(), u.stock, u.cx0, u.cy0, u.cx1, u.cy1, u.unlimitedLength, u.alongX,
+                    List.of(u.obstacles), u.limit));
+        }
+    }
+
+    private static Geometry polygonal(Geometry g) {
+        List<Polygon> polys = new ArrayList<>();
+        for (int i = 0; i < g.getNumGeometries(); i++) {
+            Geometry c = g.getGeometryN(i);
+            if (c instanceof Polygon p && p.getArea() > 0) {
+                polys.add(p);
+            }
+        }
+        return g.getFactory().createMultiPolygon(polys.toArray(new Polygon[0]));
+    }
+
+    private boolean fitsSomewhere(int t) {
+        Scratch s = new Scratch();
+        Bin.Position pos = new Bin.Position();
+        for (Slot slot : slots) {
+            if (slot.limit <= 0) {
+                continue;
+            }
+            for (Orientation o : orientationsByType.get(t)) {
+                if (!slot.boxFits(o, eps)) {
+                    continue;
+                }
+                if (slot.obstacles.length == 0) {
+                    return true;
+                }
+                Bin b = new Bin(slot, types.size());
+                if (b.bottomLeft(o, cache, eps, s, pos)) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    private String tooLargeReason(int t, double margin) {
+        double bw = Double.POSITIVE_INFINITY;
+        double bh = 0;
+        for (Orientation o : orientationsByType.get(t)) {
+            double w = o.bMaxX - o.bMinX + 2 * margin;
+            double h = o.bMaxY - o.bMinY + 2 * margin;
+            if (Math.max(w, h) < Math.max(bw, bh) || (Math.max(w, h) == Math.max(bw, bh) && Math.min(w, h) < Math.min(bw, bh))) {
+                bw = w;
+                bh = h;
+            }
+        }
+        String largest = "none";
+        double area = -1;
+        for (Stock s : request.stock()) {
+            String d;
+            double a;
+            if (s instanceof Sheet sh) {
+                if (sh.count().isPresent() && sh.count().getAsInt() == 0) {
+                    continue;
+                }
+                d = "sheet " + fmt(sh.width()) + " x " + fmt(sh.height());
+                a = sh.width() * sh.height();
+            } else if (s instanceof Coil c) {
+                d = "coil " + fmt(c.width()) + " wide";
+                a = Double.MAX_VALUE;
+            } else {
+                Envelope e = ((Remnant) s).outline().getEnvelopeInternal();
+                d = "remnant " + fmt(e.getWidth()) + " x " + fmt(e.getHeight());
+                a = ((Remnant) s).outline().getArea();
+            }
+            if (a > area) {
+                area = a;
+                largest = d;
+            }
+        }
+        return "larger than every stock (needs " + fmt(bw) + " x " + fmt(bh) + " with margin; largest " + largest + ")";
+    }
+
+    static String fmt(double v) {
+        String s = String.format(Locale.ROOT, "%.1f", v);
+        return s.endsWith(".0") ? s.substring(0, s.length() - 2) : s;
+    }
+}
