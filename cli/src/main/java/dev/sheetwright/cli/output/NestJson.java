@@ -1,0 +1,99 @@
+package dev.sheetwright.cli.output;
+
+import dev.sheetwright.cli.Cautions;
+import dev.sheetwright.cli.JobNest;
+import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.Placement;
+import dev.sheetwright.nest.model.Remnant;
+import dev.sheetwright.nest.model.Sheet;
+import dev.sheetwright.nest.model.SheetLayout;
+import dev.sheetwright.nest.model.Unplaced;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/** The {@code nest.json} document: sheets with their parts, unplaced pieces with reasons, totals. */
+public final class NestJson {
+
+    private NestJson() {
+    }
+
+    public static String sheetFile(SheetLayout s) {
+        return String.format("sheets/sheet-%03d", s.index() + 1);
+    }
+
+    public static Map<String, Object> document(JobNest nest) {
+        Map<String, Object> doc = new LinkedHashMap<>();
+        doc.put("job", nest.job().name());
+        doc.put("units", nest.job().unit().symbol());
+        List<Object> sheets = new ArrayList<>();
+        double stockArea = 0;
+        for (SheetLayout s : nest.result().sheets()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("index", s.index() + 1);
+            Map<String, Object> stock = new LinkedHashMap<>();
+            if (s.stock() instanceof Sheet sh) {
+                stock.put("name", sh.name());
+                stock.put("width", sh.width());
+                stock.put("height", sh.height());
+            } else if (s.stock() instanceof Remnant r) {
+                stock.put("id", r.id());
+                stock.put("width", r.outline().getEnvelopeInternal().getWidth());
+                stock.put("height", r.outline().getEnvelopeInternal().getHeight());
+            } else if (s.stock() instanceof Coil c) {
+                stock.put("name", c.name());
+                stock.put("width", s.usedLength());
+                stock.put("height", c.width());
+            }
+            e.put("stock", stock);
+            e.put("file", sheetFile(s) + ".dxf");
+            e.put("utilization", s.utilization());
+            List<Object> parts = new ArrayList<>();
+            for (Placement p : s.parts()) {
+                Map<String, Object> pe = new LinkedHashMap<>();
+                pe.put("fitting", p.fitting());
+                pe.put("piece", p.piece());
+                pe.put("copy", p.copy());
+                pe.put("x", p.x());
+                pe.put("y", p.y());
+                pe.put("rotation", p.rotationDeg());
+                pe.put("mirrored", p.mirrored());
+                parts.add(pe);
+            }
+            e.put("parts", parts);
+            if (s.offcut() != null) {
+                Map<String, Object> o = new LinkedHashMap<>();
+                o.put("x", s.offcut().x());
+                o.put("y", s.offcut().y());
+                o.put("width", s.offcut().width());
+                o.put("height", s.offcut().height());
+                e.put("offcut", o);
+            } else {
+                e.put("offcut", null);
+            }
+            sheets.add(e);
+            stockArea += SheetDrawings.stockArea(s);
+        }
+        doc.put("sheets", sheets);
+        List<Object> unplaced = new ArrayList<>();
+        for (Unplaced u : nest.result().unplaced()) {
+            Map<String, Object> ue = new LinkedHashMap<>();
+            ue.put("fitting", u.fitting());
+            ue.put("piece", u.piece());
+            ue.put("copy", u.copy());
+            ue.put("reason", u.reason());
+            unplaced.add(ue);
+        }
+        doc.put("unplaced", unplaced);
+        Map<String, Object> totals = new LinkedHashMap<>();
+        double partArea = nest.partArea();
+        totals.put("sheets", nest.result().sheets().size());
+        totals.put("partArea", partArea);
+        totals.put("stockArea", stockArea);
+        totals.put("utilization", stockArea > 0 ? partArea / stockArea : 0);
+        doc.put("totals", totals);
+        doc.put("cautions", Cautions.ALL);
+        return doc;
+    }
+}

@@ -1,0 +1,76 @@
+package dev.sheetwright.cli.output;
+
+import dev.sheetwright.core.geom.Pattern;
+import dev.sheetwright.core.units.LengthUnit;
+import dev.sheetwright.dxf.Drawing;
+import dev.sheetwright.dxf.Polyline;
+import dev.sheetwright.dxf.Shape;
+import dev.sheetwright.dxf.Text;
+import dev.sheetwright.dxf.Vertex;
+import dev.sheetwright.nest.jobs.JobNestRequest;
+import dev.sheetwright.nest.jobs.PatternShapes;
+import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.Placement;
+import dev.sheetwright.nest.model.Remnant;
+import dev.sheetwright.nest.model.Sheet;
+import dev.sheetwright.nest.model.SheetLayout;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.locationtech.jts.geom.Coordinate;
+
+/** One cut program per sheet: the stock outline, every placed part with its marks and label, moved exactly. */
+public final class SheetDrawings {
+
+    private SheetDrawings() {
+    }
+
+    public static Drawing drawing(SheetLayout sheet, JobNestRequest plan, String jobName, LengthUnit unit) {
+        List<Shape> shapes = new ArrayList<>();
+        shapes.add(stockOutline(sheet));
+        for (Placement pl : sheet.parts()) {
+            Pattern p = plan.pattern(pl.fitting(), pl.piece()).transformed(PatternShapes.transform(pl));
+            shapes.addAll(PatternDrawings.shapes(p, List.of(pl.fitting() + " " + pl.piece() + " #" + pl.copy()),
+                    unit));
+        }
+        if (sheet.offcut() != null) {
+            double h = unit == LengthUnit.INCH ? 0.5 : 12;
+            shapes.add(new Text(PatternDrawings.LABEL, sheet.offcut().x() + h, sheet.offcut().y() + h, h,
+                    String.format(Locale.ROOT, "OFFCUT %.2f x %.2f %s  %s sheet %d", sheet.offcut().width(),
+                            sheet.offcut().height(), unit.symbol(), jobName, sheet.index() + 1)));
+        }
+        return Drawing.of(unit.symbol(), PatternDrawings.LAYERS, shapes);
+    }
+
+    static Polyline stockOutline(SheetLayout sheet) {
+        List<Vertex> vs = new ArrayList<>();
+        if (sheet.stock() instanceof Sheet s) {
+            rectangle(vs, s.width(), s.height());
+        } else if (sheet.stock() instanceof Coil c) {
+            rectangle(vs, sheet.usedLength(), c.width());
+        } else if (sheet.stock() instanceof Remnant r) {
+            Coordinate[] cs = r.outline().getExteriorRing().getCoordinates();
+            for (int i = 0; i < cs.length - 1; i++) {
+                vs.add(Vertex.of(cs[i].x, cs[i].y));
+            }
+        }
+        return new Polyline(PatternDrawings.SHEET, vs, true);
+    }
+
+    private static void rectangle(List<Vertex> vs, double w, double h) {
+        vs.add(Vertex.of(0, 0));
+        vs.add(Vertex.of(w, 0));
+        vs.add(Vertex.of(w, h));
+        vs.add(Vertex.of(0, h));
+    }
+
+    /** Area of the stock used by this layout (coil: width x length used). */
+    public static double stockArea(SheetLayout sheet) {
+        if (sheet.stock() instanceof Sheet s) {
+            return s.width() * s.height();
+        } else if (sheet.stock() instanceof Coil c) {
+            return c.width() * sheet.usedLength();
+        }
+        return ((Remnant) sheet.stock()).outline().getArea();
+    }
+}
