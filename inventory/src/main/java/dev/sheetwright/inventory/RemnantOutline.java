@@ -1,6 +1,7 @@
 package dev.sheetwright.inventory;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
 import org.locationtech.jts.algorithm.Orientation;
 import org.locationtech.jts.geom.Coordinate;
@@ -76,7 +77,8 @@ public record RemnantOutline(List<OutlinePoint> vertices) {
 
     /**
      * A polygon from its corners in order (either winding). A repeated closing point is dropped; the result
-     * is moved to the origin and wound counter-clockwise.
+     * is moved so its bounding box starts at the origin, wound counter-clockwise, and starts at its lowest
+     * (then leftmost) corner, so the same shape always gives equal outlines.
      *
      * @throws IllegalArgumentException for fewer than 3 points, repeated corners or a self-intersecting ring
      */
@@ -88,19 +90,26 @@ public record RemnantOutline(List<OutlinePoint> vertices) {
         if (pts.size() > 1 && pts.get(0).equals(pts.get(pts.size() - 1))) {
             pts.remove(pts.size() - 1);
         }
-        if (pts.size() >= 3) {
-            double x0 = minX(pts);
-            double y0 = minY(pts);
-            List<OutlinePoint> moved = new ArrayList<>(pts.size());
-            for (OutlinePoint p : pts) {
-                moved.add(OutlinePoint.of(p.x() - x0, p.y() - y0));
-            }
-            Coordinate[] ring = ring(moved);
-            if (!Orientation.isCCWArea(ring)) {
-                java.util.Collections.reverse(moved);
-            }
-            pts = moved;
+        new RemnantOutline(pts); // validates the corners as given, so errors show the caller's numbers
+        double x0 = minX(pts);
+        double y0 = minY(pts);
+        List<OutlinePoint> moved = new ArrayList<>(pts.size());
+        for (OutlinePoint p : pts) {
+            moved.add(OutlinePoint.of(p.x() - x0, p.y() - y0));
         }
+        if (!Orientation.isCCWArea(ring(moved))) {
+            Collections.reverse(moved);
+        }
+        int start = 0;
+        for (int i = 1; i < moved.size(); i++) {
+            OutlinePoint p = moved.get(i);
+            OutlinePoint best = moved.get(start);
+            if (p.y() < best.y() || (p.y() == best.y() && p.x() < best.x())) {
+                start = i;
+            }
+        }
+        Collections.rotate(moved, -start);
+        pts = moved;
         return new RemnantOutline(pts);
     }
 
