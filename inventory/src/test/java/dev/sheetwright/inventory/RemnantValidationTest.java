@@ -123,8 +123,11 @@ class RemnantValidationTest {
 
     @Test
     void lengthUnit_inch_isExactly25point4mm() {
-        assertEquals(1219.2, LengthUnit.IN.toMm(48), 1e-12);
-        assertEquals(48.0, LengthUnit.IN.fromMm(1219.2), 1e-12);
+        assertEquals(1219.2, LengthUnit.IN.toMm(48));
+        assertEquals(762.0, LengthUnit.IN.toMm(30));
+        assertEquals(1217.6125, LengthUnit.IN.toMm(47.9375));
+        assertEquals(48.0, LengthUnit.IN.fromMm(1219.2));
+        assertEquals(2.5, LengthUnit.MM.toMm(2.5));
         assertEquals(1.0, LengthUnit.IN.areaFromMm2(645.16), 1e-12);
     }
 }
