@@ -1,7 +1,5 @@
 package dev.sheetwright.cli;
 
-import dev.sheetwright.cli.job.JobFileException;
-import java.io.PrintWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -10,7 +8,8 @@ import picocli.CommandLine.Spec;
 /** The root command: groups the subcommands and prints usage when run alone. */
 @Command(name = "sheetwright", mixinStandardHelpOptions = true, versionProvider = ManifestVersion.class,
         description = "Round duct fittings from shop ticket to flat patterns, sheet cut programs and a material quote.",
-        subcommands = {DevelopCommand.class, NestCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {DevelopCommand.class, NestCommand.class, RemnantCommand.class,
+            CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:done", "1:unexpected failure (a bug or an I/O problem)",
             "2:bad input: the message names the file, fitting and field; nothing was written",
@@ -34,22 +33,10 @@ public final class SheetwrightCommand implements Runnable {
     }
 
     static int exitCodeOf(Throwable t) {
-        if (t instanceof JobFileException || t instanceof IllegalArgumentException
-                || t instanceof CommandLine.ParameterException) {
-            return ExitCodes.BAD_INPUT;
-        }
-        return ExitCodes.FAILURE;
+        return ExitCodes.of(t);
     }
 
     private static int handle(Exception e, CommandLine cl, CommandLine.ParseResult parsed) {
-        PrintWriter err = cl.getErr();
-        int code = exitCodeOf(e);
-        String prefix = code == ExitCodes.BAD_INPUT ? "error: " : "failed: ";
-        err.println(prefix + (e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage()));
-        if (code == ExitCodes.FAILURE || Boolean.getBoolean("sheetwright.verbose")) {
-            e.printStackTrace(err);
-        }
-        err.flush();
-        return code;
+        return ExitCodes.report(e, cl.getErr());
     }
 }

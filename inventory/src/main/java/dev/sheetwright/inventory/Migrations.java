@@ -1,0 +1,35 @@
+package dev.sheetwright.inventory;
+
+import java.util.List;
+
+/** The schema history. To change the schema, append a migration with the next version; never edit one. */
+final class Migrations {
+    private Migrations() {
+    }
+
+    static final Migration V1 = new Migration(1, "initial schema", List.of(
+            """
+            CREATE TABLE remnant (
+                seq            INTEGER PRIMARY KEY AUTOINCREMENT,
+                material       TEXT    NOT NULL,
+                gauge          INTEGER,
+                thickness_mm   REAL,
+                outline        TEXT    NOT NULL,
+                width_mm       REAL    NOT NULL CHECK (width_mm > 0),
+                height_mm      REAL    NOT NULL CHECK (height_mm > 0),
+                area_mm2       REAL    NOT NULL CHECK (area_mm2 > 0),
+                location       TEXT    NOT NULL,
+                added          TEXT    NOT NULL,
+                source         TEXT    NOT NULL,
+                state          TEXT    NOT NULL CHECK (state IN ('available','reserved','used')),
+                reserved_by    TEXT,
+                reserved_until INTEGER,
+                CHECK (gauge IS NOT NULL OR thickness_mm IS NOT NULL),
+                CHECK ((state = 'reserved') = (reserved_by IS NOT NULL AND reserved_until IS NOT NULL))
+            )""",
+            "CREATE INDEX remnant_by_state ON remnant (state, material)",
+            "CREATE INDEX remnant_by_plan ON remnant (reserved_by)"));
+
+    /** All migrations, in version order. */
+    static final List<Migration> ALL = List.of(V1);
+}

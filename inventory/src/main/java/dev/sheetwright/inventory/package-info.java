@@ -1,0 +1,12 @@
+/**
+ * The shop's rack of offcuts (remnants), kept in an embedded SQLite database so that a plan can take
+ * material from scrap before a new sheet is opened, and the offcut a job leaves behind is recorded.
+ *
+ * <p>Everything in this package is in millimetres. {@link dev.sheetwright.inventory.LengthUnit} converts
+ * inch values for callers; parsing of user-typed sizes belongs to the command line, not here.
+ *
+ * <p>{@link dev.sheetwright.inventory.RemnantStore} is the entry point. Two processes (or two threads,
+ * each with its own store) may work on the same file at once: reservations are leases with an expiry,
+ * and every change is one SQLite transaction.
+ */
+package dev.sheetwright.inventory;

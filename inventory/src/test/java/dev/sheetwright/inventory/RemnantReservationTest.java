@@ -1,0 +1,239 @@
+package dev.sheetwright.inventory;
+
+import static dev.sheetwright.inventory.RemnantStoreTest.ids;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import java.nio.file.Path;
+import java.time.Duration;
+import java.time.Instant;
+import java.util.List;
+import java.util.Set;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class RemnantReservationTest {
+    private static final Instant T0 = Instant.parse("2025-03-14T09:30:00Z");
+    private static final Duration TTL = Duration.ofMinutes(10);
+    private static final RemnantFilter GALV = RemnantFilter.any().withMaterial(RemnantMaterial.GALVANIZED);
+
+    @TempDir
+    Path dir;
+    private Path file;
+    private MutableClock clock;
+
+    @BeforeEach
+    void fill() {
+        file = dir.resolve("r.db");
+        clock = new MutableClock(T0);
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            store.add(galv(1200, 600));                                      // R-0001
+            store.add(galv(600, 300));                                       // R-0002
+            store.add(galv(900, 900));                                       // R-0003
+            store.add(NewRemnant.manual(RemnantMaterial.STEEL, 20, RemnantOutline.rectangle(500, 500), ""));
+        }
+    }
+
+    private static NewRemnant galv(double w, double h) {
+        return NewRemnant.manual(RemnantMaterial.GALVANIZED, 24, RemnantOutline.rectangle(w, h), "rack");
+    }
+
+    private static NewRemnant offcut(double w, double h, int sheet) {
+        return NewRemnant.offcut(RemnantMaterial.GALVANIZED, 24, null, RemnantOutline.rectangle(w, h), "rack",
+                "J-17", sheet);
+    }
+
+    @Test
+    void reserve_matchingAvailable_flipsThemToReservedWithOwnerAndExpiry() {
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            List<Remnant> got = store.reserve(GALV, "plan-a", TTL);
+
+            assertEquals(List.of("R-0001", "R-0002", "R-0003"), ids(got));
+            for (Remnant r : got) {
+                assertEquals(RemnantState.RESERVED, r.state());
+                assertEquals("plan-a", r.reservedBy());
+                assertEquals(T0.plus(TTL), r.reservedUntil());
+            }
+            assertEquals(RemnantState.AVAILABLE, store.get("R-0004").orElseThrow().state());
+        }
+    }
+
+    @Test
+    void reserve_maxCount_takesSmallestFirstAndOthersGetTheRest() {
+        try (RemnantStore a = RemnantStore.open(file, clock); RemnantStore b = RemnantStore.open(file, clock)) {
+            assertEquals(List.of("R-0002"), ids(a.reserve(GALV, "plan-a", TTL, 1)));
+
+            assertEquals(List.of("R-0001", "R-0003"), ids(b.reserve(GALV, "plan-b", TTL)));
+            assertEquals(List.of("R-0002"), ids(a.reserve(GALV, "plan-a", TTL)));
+        }
+    }
+
+    @Test
+    void reserve_staleReservation_canBeTakenByAnotherPlanAndTheFirstCannotCommitIt() {
+        try (RemnantStore a = RemnantStore.open(file, clock); RemnantStore b = RemnantStore.open(file, clock)) {
+            a.reserve(GALV, "plan-a", Duration.ofMinutes(1));
+            assertEquals(List.of(), b.reserve(GALV, "plan-b", TTL));
+
+            clock.advance(Duration.ofMinutes(1));
+            List<Remnant> taken = b.reserve(GALV, "plan-b", TTL, 1);
+
+            assertEquals(List.of("R-0002"), ids(taken));
+            RemnantConflictException e = assertThrows(RemnantConflictException.class,
+                    () -> a.commit("plan-a", Set.of("R-0002"), List.of()));
+            assertEquals("R-0002 is not reserved by plan plan-a (it is reserved by plan plan-b until "
+                    + T0.plus(Duration.ofMinutes(11)) + "); reserve it before committing", e.getMessage());
+            assertEquals(List.of(), b.commit("plan-b", Set.of("R-0002"), List.of()));
+            assertEquals(RemnantState.USED, b.get("R-0002").orElseThrow().state());
+        }
+    }
+
+    @Test
+    void commit_expiredButUntaken_stillBelongsToThePlan() {
+        try (RemnantStore a = RemnantStore.open(file, clock)) {
+            a.reserve(GALV, "plan-a", Duration.ofMinutes(1), 1);
+            clock.advance(Duration.ofHours(1));
+
+            a.commit("plan-a", Set.of("R-0002"), List.of());
+
+            assertEquals(RemnantState.USED, a.get("R-0002").orElseThrow().state());
+        }
+    }
+
+    @Test
+    void commit_marksUsedReleasesTheRestAndAddsOffcutsWithIds() {
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            store.reserve(GALV, "plan-a", TTL);
+
+            List<Remnant> offcuts = store.commit("plan-a", Set.of("R-0001", "R-0003"),
+                    List.of(offcut(400, 300, 1), offcut(200, 900, 2)));
+
+            assertEquals(List.of("R-0005", "R-0006"), ids(offcuts));
+            assertEquals("job J-17 sheet 2", offcuts.get(1).source().text());
+            assertEquals(RemnantState.AVAILABLE, offcuts.get(0).state());
+            assertEquals(RemnantState.USED, store.get("R-0001").orElseThrow().state());
+            assertEquals(RemnantState.USED, store.get("R-0003").orElseThrow().state());
+            Remnant back = store.get("R-0002").orElseThrow();
+            assertEquals(RemnantState.AVAILABLE, back.state());
+            assertEquals(null, back.reservedBy());
+            assertEquals(List.of("R-0002", "R-0004", "R-0005", "R-0006"),
+                    ids(store.list(RemnantFilter.any(), RemnantSort.ID)));
+            assertEquals(List.of(), store.reservedFor("plan-a"));
+        }
+    }
+
+    @Test
+    void commit_sameRemnantTwice_isRefusedAsAlreadyUsed() {
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            store.reserve(GALV, "plan-a", TTL);
+            store.commit("plan-a", Set.of("R-0001"), List.of());
+            List<String> before = InventorySnapshot.of(file);
+
+            RemnantConflictException e = assertThrows(RemnantConflictException.class,
+                    () -> store.commit("plan-a", Set.of("R-0001"), List.of(offcut(10, 10, 1))));
+
+            assertEquals("R-0001 is already used; plan plan-a cannot cut it again", e.getMessage());
+            assertEquals(before, InventorySnapshot.of(file));
+        }
+    }
+
+    @Test
+    void commit_notReserved_isRefusedAndChangesNothing() {
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            store.reserve(GALV, "plan-a", TTL, 1);
+            List<String> before = InventorySnapshot.of(file);
+
+            RemnantConflictException e = assertThrows(RemnantConflictException.class,
+                    () -> store.commit("plan-a", Set.of("R-0002", "R-0004"), List.of(offcut(10, 10, 1))));
+
+            assertEquals("R-0004 is not reserved by plan plan-a (it is available); reserve it before committing",
+                    e.getMessage());
+            assertEquals(before, InventorySnapshot.of(file));
+        }
+    }
+
+    @Test
+    void commit_unknownId_namesIdAndFile() {
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                    () -> store.commit("plan-a", Set.of("R-0099"), List.of()));
+            assertEquals("no remnant R-0099 in " + file, e.getMessage());
+        }
+    }
+
+    @Test
+    void commit_failureAfterFirstUpdate_leavesInventoryExactlyAsItWas() {
+        try (RemnantStore setup = RemnantStore.open(file, clock)) {
+            setup.reserve(GALV, "plan-a", TTL);
+        }
+        List<String> before = InventorySnapshot.of(file);
+        RemnantStore.FaultPoint crash = step -> {
+            if (step.equals("commit:used R-0001")) {
+                throw new IllegalStateException("simulated crash at " + step);
+            }
+        };
+        try (RemnantStore store = RemnantStore.open(file, clock, Migrations.ALL, crash)) {
+            IllegalStateException e = assertThrows(IllegalStateException.class,
+                    () -> store.commit("plan-a", Set.of("R-0001", "R-0002"), List.of(offcut(10, 10, 1))));
+            assertEquals("simulated crash at commit:used R-0001", e.getMessage());
+        }
+
+        assertEquals(before, InventorySnapshot.of(file));
+        try (RemnantStore after = RemnantStore.open(file, clock)) {
+            assertEquals(List.of("R-0001", "R-0002", "R-0003"), ids(after.reservedFor("plan-a")));
+            assertEquals("R-0005", after.commit("plan-a", Set.of("R-0001"), List.of(offcut(10, 10, 1)))
+                    .get(0).id());
+        }
+    }
+
+    @Test
+    void commit_databaseRefusesSecondOffcut_rollsBackUsedAndFirstOffcut() {
+        try (RemnantStore setup = RemnantStore.open(file, clock)) {
+            setup.reserve(GALV, "plan-a", TTL);
+        }
+        InventorySnapshot.execute(file, "CREATE TRIGGER disk_full BEFORE INSERT ON remnant"
+                + " WHEN NEW.source = 'job J-17 sheet 2' BEGIN SELECT RAISE(ABORT, 'disk full'); END");
+        List<String> before = InventorySnapshot.of(file);
+
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            InventoryStorageException e = assertThrows(InventoryStorageException.class,
+                    () -> store.commit("plan-a", Set.of("R-0001", "R-0003"),
+                            List.of(offcut(400, 300, 1), offcut(200, 900, 2))));
+            assertEquals(true, e.getMessage().contains("disk full"), e.getMessage());
+        }
+
+        assertEquals(before, InventorySnapshot.of(file));
+    }
+
+    @Test
+    void release_returnsThePlansRemnantsToTheRack() {
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            store.reserve(GALV, "plan-a", TTL);
+
+            assertEquals(3, store.release("plan-a"));
+
+            assertEquals(List.of(), store.reservedFor("plan-a"));
+            assertEquals(List.of("R-0001", "R-0002", "R-0003"), ids(store.reserve(GALV, "plan-b", TTL)));
+        }
+    }
+
+    @Test
+    void remove_liveReservation_isRefused() {
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            store.reserve(GALV, "plan-a", TTL, 1);
+            RemnantConflictException e = assertThrows(RemnantConflictException.class, () -> store.remove("R-0002"));
+            assertEquals("R-0002 is reserved by plan plan-a until 2025-03-14T09:40:00Z; release that plan first",
+                    e.getMessage());
+        }
+    }
+
+    @Test
+    void reserve_badArguments_nameTheField() {
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            assertEquals("ttl: PT0S is out of range; must be > 0 and at most PT720H", assertThrows(
+                    IllegalArgumentException.class, () -> store.reserve(GALV, "p", Duration.ZERO)).getMessage());
+            assertEquals("planId: ' ' must be 1 to 100 printable characters without surrounding blanks",
+                    assertThrows(IllegalArgumentException.class, () -> store.reserve(GALV, " ", TTL)).getMessage());
+        }
+    }
+}

@@ -1,0 +1,186 @@
+package dev.sheetwright.inventory;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class RemnantStoreTest {
+    private static final double EPS = 1e-9;
+    private static final Instant T0 = Instant.parse("2025-03-14T09:30:00Z");
+
+    @TempDir
+    Path dir;
+
+    private static NewRemnant galv(double w, double h, String location) {
+        return NewRemnant.manual(RemnantMaterial.GALVANIZED, 24, RemnantOutline.rectangle(w, h), location);
+    }
+
+    @Test
+    void open_emptyFolder_createsFolderFileAndSchemaV1() {
+        Path file = dir.resolve("deep/er/remnants.db");
+
+        try (RemnantStore store = RemnantStore.open(file)) {
+            assertTrue(Files.isRegularFile(file));
+            assertEquals(1, store.schemaVersion());
+            assertEquals(List.of(), store.list(RemnantFilter.any(), RemnantSort.ID));
+        }
+        List<String> snapshot = InventorySnapshot.of(file);
+        assertEquals(1, snapshot.stream().filter(r -> r.startsWith("version=")).count());
+        assertTrue(snapshot.get(0).startsWith("version=1 description=initial schema"), snapshot.toString());
+    }
+
+    @Test
+    void open_existingFile_doesNotRerunMigrationsAndKeepsData() {
+        Path file = dir.resolve("remnants.db");
+        MutableClock clock = new MutableClock(T0);
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            store.add(galv(1200, 600, "A1"));
+        }
+        List<String> before = InventorySnapshot.of(file);
+        clock.advance(java.time.Duration.ofDays(1));
+
+        try (RemnantStore store = RemnantStore.open(file, clock)) {
+            assertEquals(1, store.schemaVersion());
+            assertEquals(1, store.list(RemnantFilter.any(), RemnantSort.ID).size());
+        }
+
+        assertEquals(before, InventorySnapshot.of(file));
+    }
+
+    @Test
+    void open_withAppendedMigration_appliesOnlyTheNewStep() {
+        Path file = dir.resolve("remnants.db");
+        try (RemnantStore store = RemnantStore.open(file)) {
+            store.add(galv(1200, 600, "A1"));
+        }
+        Migration v2 = new Migration(2, "add note column",
+                List.of("ALTER TABLE remnant ADD COLUMN note TEXT NOT NULL DEFAULT ''"));
+
+        try (RemnantStore store = RemnantStore.open(file, java.time.Clock.systemUTC(),
+                List.of(Migrations.V1, v2), RemnantStore.FaultPoint.NONE)) {
+            assertEquals(2, store.schemaVersion());
+            assertEquals("A1", store.get("R-0001").orElseThrow().location());
+        }
+        List<String> snapshot = InventorySnapshot.of(file);
+        assertTrue(snapshot.get(0).contains("note="), snapshot.get(0));
+        assertEquals(2, snapshot.stream().filter(r -> r.startsWith("version=")).count());
+    }
+
+    @Test
+    void open_fileFromNewerProgram_refusesWithVersions() {
+        Path file = dir.resolve("remnants.db");
+        RemnantStore.open(file).close();
+        InventorySnapshot.execute(file, "INSERT INTO schema_version VALUES (7, 'future', '2030-01-01T00:00:00Z')");
+
+        InventoryStorageException e = assertThrows(InventoryStorageException.class, () -> RemnantStore.open(file));
+
+        assertEquals("inventory: " + file + " has schema version 7; this program knows versions up to 1",
+                e.getMessage());
+    }
+
+    @Test
+    void add_thenGetAndList_roundTripsEveryField() {
+        MutableClock clock = new MutableClock(T0);
+        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"), clock)) {
+            RemnantOutline l = RemnantOutline.parse("0,0 1000,0 1000,300 400,300 400,800 0,800");
+            NewRemnant in = new NewRemnant(RemnantMaterial.STAINLESS, null, 1.2, l, "rack B, slot 3",
+                    RemnantSource.job("Smith Kitchen", 2));
+
+            Remnant added = store.add(in);
+
+            assertEquals("R-0001", added.id());
+            assertEquals(RemnantMaterial.STAINLESS, added.material());
+            assertEquals(null, added.gauge());
+            assertEquals(1.2, added.thicknessMm(), EPS);
+            assertEquals(l, added.outline());
+            assertEquals(1000, added.widthMm(), EPS);
+            assertEquals(800, added.heightMm(), EPS);
+            assertEquals(1000 * 300 + 400 * 500, added.areaMm2(), EPS);
+            assertEquals(added.areaMm2(), added.polygon().getArea(), EPS);
+            assertEquals("rack B, slot 3", added.location());
+            assertEquals(T0, added.added());
+            assertEquals("job Smith Kitchen sheet 2", added.source().text());
+            assertEquals(RemnantState.AVAILABLE, added.state());
+            assertEquals(added, store.get("R-0001").orElseThrow());
+            assertEquals(List.of(added), store.list(RemnantFilter.any(), RemnantSort.ID));
+        }
+    }
+
+    @Test
+    void add_ids_areSequentialAndNeverReusedAfterRemove() {
+        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"))) {
+            assertEquals("R-0001", store.add(galv(100, 100, "")).id());
+            assertEquals("R-0002", store.add(galv(100, 100, "")).id());
+            store.remove("R-0002");
+            store.remove("r-1");
+
+            assertEquals("R-0003", store.add(galv(100, 100, "")).id());
+            assertFalse(store.get("R-0002").isPresent());
+        }
+        try (RemnantStore again = RemnantStore.open(dir.resolve("r.db"))) {
+            assertEquals("R-0004", again.add(galv(100, 100, "")).id());
+        }
+    }
+
+    @Test
+    void remove_unknownId_namesIdAndFileAndChangesNothing() {
+        Path file = dir.resolve("r.db");
+        try (RemnantStore store = RemnantStore.open(file)) {
+            store.add(galv(100, 100, ""));
+            List<String> before = InventorySnapshot.of(file);
+
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                    () -> store.removeAll(List.of("R-0001", "R-0099")));
+
+            assertEquals("no remnant R-0099 in " + file, e.getMessage());
+            assertEquals(before, InventorySnapshot.of(file));
+        }
+    }
+
+    @Test
+    void remove_malformedId_namesTheValue() {
+        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"))) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.remove("42"));
+            assertEquals("id: '42' is not a remnant id; expected R- followed by a number from 1, e.g. R-0042",
+                    e.getMessage());
+        }
+    }
+
+    @Test
+    void list_filterAndSort_selectAndOrder() {
+        MutableClock clock = new MutableClock(T0);
+        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"), clock)) {
+            store.add(galv(500, 500, "a"));                        // R-0001, 250000
+            clock.advance(java.time.Duration.ofHours(1));
+            store.add(galv(1000, 400, "b"));                       // R-0002, 400000
+            clock.advance(java.time.Duration.ofHours(1));
+            store.add(NewRemnant.manualMm(RemnantMaterial.ALUMINUM, 1.0,
+                    RemnantOutline.rectangle(300, 300), "c"));      // R-0003, 90000
+            store.add(NewRemnant.manual(RemnantMaterial.GALVANIZED, 20,
+                    RemnantOutline.rectangle(2000, 1000), "d"));    // R-0004, 2000000
+
+            assertEquals(List.of("R-0003", "R-0001", "R-0002", "R-0004"),
+                    ids(store.list(RemnantFilter.any(), RemnantSort.AREA_ASC)));
+            assertEquals(List.of("R-0004", "R-0002", "R-0001", "R-0003"),
+                    ids(store.list(RemnantFilter.any(), RemnantSort.AREA_DESC)));
+            assertEquals(List.of("R-0001", "R-0002"), ids(store.list(
+                    RemnantFilter.any().withMaterial(RemnantMaterial.GALVANIZED).withGauge(24), RemnantSort.ID)));
+            assertEquals(List.of("R-0003"), ids(store.list(
+                    RemnantFilter.any().withThicknessMm(1.001), RemnantSort.ID)));
+            assertEquals(List.of("R-0002", "R-0004"), ids(store.list(
+                    RemnantFilter.any().withMinAreaMm2(400_000.0), RemnantSort.DATE)));
+        }
+    }
+
+    static List<String> ids(List<Remnant> remnants) {
+        return remnants.stream().map(Remnant::id).toList();
+    }
+}
