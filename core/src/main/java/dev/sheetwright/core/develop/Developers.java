@@ -20,6 +20,9 @@ public final class Developers {
         if (spec instanceof dev.sheetwright.core.fitting.EccentricReducerSpec e) {
             return EccentricReducerDeveloper.develop(e, ctx);
         }
+        if (spec instanceof dev.sheetwright.core.fitting.ElbowSpec e) {
+            return ElbowDeveloper.develop(e, ctx);
+        }
         throw new IllegalArgumentException("no development method for fitting type " + spec.type());
     }
 }
