@@ -23,6 +23,9 @@ public final class Developers {
         if (spec instanceof dev.sheetwright.core.fitting.ElbowSpec e) {
             return ElbowDeveloper.develop(e, ctx);
         }
+        if (spec instanceof dev.sheetwright.core.fitting.OffsetSpec o) {
+            return OffsetDeveloper.develop(o, ctx);
+        }
         throw new IllegalArgumentException("no development method for fitting type " + spec.type());
     }
 }
