@@ -213,7 +213,7 @@ class EccentricReducerDeveloperTest {
     }
 
     static boolean isRadial(Edge e) {
-        return e instanceof Line && Math.abs(e.start().cross(e.end())) < 1e-9 * e.start().length() * e.end().length()
+        return e instanceof Line && Math.abs(e.start().cross(e.end())) <= 1e-9 * e.start().length() * e.end().length()
                 && e.length() > 1;
     }
 
