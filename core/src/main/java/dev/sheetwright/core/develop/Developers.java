@@ -17,6 +17,15 @@ public final class Developers {
         if (spec instanceof ReducerSpec reducer) {
             return ReducerDeveloper.develop(reducer, ctx);
         }
+        if (spec instanceof dev.sheetwright.core.fitting.EccentricReducerSpec e) {
+            return EccentricReducerDeveloper.develop(e, ctx);
+        }
+        if (spec instanceof dev.sheetwright.core.fitting.ElbowSpec e) {
+            return ElbowDeveloper.develop(e, ctx);
+        }
+        if (spec instanceof dev.sheetwright.core.fitting.OffsetSpec o) {
+            return OffsetDeveloper.develop(o, ctx);
+        }
         throw new IllegalArgumentException("no development method for fitting type " + spec.type());
     }
 }

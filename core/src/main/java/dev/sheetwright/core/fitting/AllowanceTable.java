@@ -30,6 +30,11 @@ public final class AllowanceTable {
     static final double BEAD_END = 0.375;
     /** Crimp length 1 1/4 in (from memory: 1 1/4-1 1/2 in, trade-reference §7.4). */
     static final double CRIMP_END = 1.25;
+    /**
+     * Circumferential (between-gore) seam of a gored elbow: a plain lap of 1/4 in on the lower piece's miter edge,
+     * riveted or screwed and sealed (common practice; lap rule [S:NAVY ch.2], trade-reference §3.4).
+     */
+    static final double ELBOW_MITER_LAP = 0.25;
 
     private final LengthUnit unit;
 
@@ -49,6 +54,11 @@ public final class AllowanceTable {
     /** The seam used when a job gives none: a grooved (pipe-lock) seam with the default lock (common practice). */
     public SeamAllowance defaultSeam() {
         return seam(SeamKind.GROOVE, inches(GROOVE_LOCK));
+    }
+
+    /** The seam between elbow gores when a job gives none: a 1/4 in lap (common practice). */
+    public SeamAllowance defaultMiterSeam() {
+        return seam(SeamKind.LAP, inches(ELBOW_MITER_LAP));
     }
 
     /** A seam of the given kind with lock/lap width {@code w} (ignored where the kind has fixed widths). */
