@@ -4,6 +4,10 @@ import dev.sheetwright.core.cutting.CuttingProcess;
 import dev.sheetwright.core.fitting.AllowanceTable;
 import dev.sheetwright.core.fitting.Allowances;
 import dev.sheetwright.core.fitting.DimensionFace;
+import dev.sheetwright.core.fitting.EccentricReducerSpec;
+import dev.sheetwright.core.fitting.ElbowSpec;
+import dev.sheetwright.core.fitting.OffsetSpec;
+import dev.sheetwright.core.fitting.SeamPosition;
 import dev.sheetwright.core.fitting.EndAllowance;
 import dev.sheetwright.core.fitting.FittingException;
 import dev.sheetwright.core.fitting.FittingSpec;
@@ -46,6 +50,7 @@ public final class JobReader {
     private static final Set<String> TOP = Set.of("version", "job", "units", "material", "dimensions",
             "allowances", "fittings", "cutting", "stock", "tolerance", "quote");
     private static final Set<String> COMMON = Set.of("id", "type", "qty", "pieces", "allowances", "note");
+    private static final String TYPES = "pipe, reducer, cone, elbow, offset";
 
     private final String file;
     private LengthUnit unit;
@@ -160,8 +165,11 @@ public final class JobReader {
      * Reads an {@code allowances:} mapping over {@code base}. {@code ends} is one value for both ends or a
      * mapping with the two end names given.
      */
+    private boolean miterAllowed;
+
     private Allowances allowances(Fields a, Allowances base, String endA, String endB, boolean inFitting) {
-        a.allowOnly(Set.of("seam", "ends", "notch"));
+        a.allowOnly(inFitting && miterAllowed ? Set.of("seam", "ends", "notch", "miter")
+                : Set.of("seam", "ends", "notch"));
         SeamAllowance seam = base.seam();
         if (a.has("seam")) {
             try {
@@ -207,23 +215,111 @@ public final class JobReader {
             switch (type) {
                 case "pipe": {
                     ff.allowOnly(union(COMMON, Set.of("diameter", "length")));
-                    Allowances a = ff.has("allowances")
-                            ? allowances(ff.map("allowances"), defaults, "first", "second", true) : defaults;
-                    return new PipeSpec(id, qty, ff.positive("diameter"), ff.positive("length"), pieces, a);
+                    return new PipeSpec(id, qty, ff.positive("diameter"), ff.positive("length"), pieces,
+                            fittingAllowances(ff, defaults, "first", "second"));
                 }
                 case "reducer": {
-                    ff.allowOnly(union(COMMON, Set.of("large", "small", "height")));
-                    Allowances a = ff.has("allowances")
-                            ? allowances(ff.map("allowances"), defaults, "large", "small", true) : defaults;
+                    ff.allowOnly(union(COMMON, Set.of("large", "small", "height", "offset", "flat")));
+                    Allowances a = fittingAllowances(ff, defaults, "large", "small");
+                    if (ff.has("offset") || ff.bool("flat", false)) {
+                        double[] off = offset(ff);
+                        return new EccentricReducerSpec(id, qty, ff.positive("large"), ff.number("small"),
+                                ff.positive("height"), off[0], off[1], ff.bool("flat", false), pieces, a);
+                    }
+                    if (ff.number("small") == 0) {
+                        return new EccentricReducerSpec(id, qty, ff.positive("large"), 0, ff.positive("height"),
+                                0, 0, false, pieces, a);
+                    }
                     return new ReducerSpec(id, qty, ff.positive("large"), ff.positive("small"),
                             ff.positive("height"), pieces, a);
                 }
+                case "cone": {
+                    ff.allowOnly(union(COMMON, Set.of("diameter", "height", "offset")));
+                    double[] off = offset(ff);
+                    return new EccentricReducerSpec(id, qty, ff.positive("diameter"), 0, ff.positive("height"),
+                            off[0], off[1], false, pieces, fittingAllowances(ff, defaults, "large", "small"));
+                }
+                case "elbow": {
+                    ff.allowOnly(union(COMMON, Set.of("diameter", "angle", "gores", "radius", "seam-at")));
+                    noPieces(ff, pieces);
+                    miterAllowed = true;
+                    Allowances a = fittingAllowances(ff, defaults, "first", "second");
+                    SeamAllowance miter = miterSeam(ff);
+                    miterAllowed = false;
+                    return new ElbowSpec(id, qty, ff.positive("diameter"), ff.positive("angle"),
+                            ff.integer("gores", 0, 2, ElbowSpec.MAX_GORES), ff.notNegative("radius", 0),
+                            seamAt(ff), a, miter);
+                }
+                case "offset": {
+                    ff.allowOnly(union(COMMON, Set.of("diameter", "offset", "angle", "length", "radius", "gores",
+                            "seam-at")));
+                    noPieces(ff, pieces);
+                    if (ff.has("angle") == ff.has("length")) {
+                        throw ff.error("angle", "give either angle (of each elbow) or length (the advance)");
+                    }
+                    miterAllowed = true;
+                    Allowances a = fittingAllowances(ff, defaults, "first", "second");
+                    SeamAllowance miter = miterSeam(ff);
+                    miterAllowed = false;
+                    return new OffsetSpec(id, qty, ff.positive("diameter"), ff.positive("offset"),
+                            ff.notNegative("angle", 0), ff.notNegative("length", 0), ff.notNegative("radius", 0),
+                            ff.integer("gores", 0, 2, ElbowSpec.MAX_GORES), seamAt(ff), a, miter);
+                }
                 default:
-                    throw ff.error("type", "unknown fitting type '" + type + "'; known types: pipe, reducer");
+                    throw ff.error("type", "unknown fitting type '" + type + "'; known types: " + TYPES);
             }
         } catch (FittingException e) {
             throw new JobFileException(file, e.fitting(), e.field(), stripPrefix(e));
         }
+    }
+
+    private Allowances fittingAllowances(Fields ff, Allowances defaults, String endA, String endB) {
+        return ff.has("allowances") ? allowances(ff.map("allowances"), defaults, endA, endB, true) : defaults;
+    }
+
+    private SeamAllowance miterSeam(Fields ff) {
+        if (ff.has("allowances") && ff.map("allowances").has("miter")) {
+            Fields a = ff.map("allowances");
+            try {
+                return table.parseSeam(a.string("miter"));
+            } catch (IllegalArgumentException e) {
+                if (e instanceof JobFileException j) {
+                    throw j;
+                }
+                throw a.error("miter", e.getMessage());
+            }
+        }
+        return table.defaultMiterSeam();
+    }
+
+    private static void noPieces(Fields ff, int pieces) {
+        if (pieces != 1) {
+            throw ff.error("pieces", "an elbow is already made of gores; pieces does not apply");
+        }
+    }
+
+    private static SeamPosition seamAt(Fields ff) {
+        if (!ff.has("seam-at")) {
+            return SeamPosition.SIDE;
+        }
+        try {
+            return SeamPosition.parse(ff.string("seam-at"));
+        } catch (IllegalArgumentException e) {
+            throw ff.error("seam-at", e.getMessage());
+        }
+    }
+
+    /** {@code offset: 2} (along x) or {@code offset: {x: 2, y: 1}}; absent = no offset. */
+    private static double[] offset(Fields ff) {
+        if (!ff.has("offset")) {
+            return new double[] {0, 0};
+        }
+        if (ff.raw("offset") instanceof java.util.Map<?, ?>) {
+            Fields o = ff.map("offset");
+            o.allowOnly(Set.of("x", "y"));
+            return new double[] {o.number("x", 0), o.number("y", 0)};
+        }
+        return new double[] {ff.number("offset"), 0};
     }
 
     private static String stripPrefix(FittingException e) {
