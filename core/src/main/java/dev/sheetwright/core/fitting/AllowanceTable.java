@@ -30,6 +30,11 @@ public final class AllowanceTable {
     static final double BEAD_END = 0.375;
     /** Crimp length 1 1/4 in (from memory: 1 1/4-1 1/2 in, trade-reference §7.4). */
     static final double CRIMP_END = 1.25;
+    /**
+     * Tap flange turned out on the joint edge of a tap, 1/2 in (common practice: taps get tab or flange
+     * allowances, trade-reference §4.3 and §6; the width is a shop default, verify on the job).
+     */
+    static final double TAP_FLANGE = 0.5;
 
     private final LengthUnit unit;
 
@@ -88,7 +93,15 @@ public final class AllowanceTable {
         return seam(kind, w);
     }
 
-    /** Reads an end allowance: {@code none}, {@code lap [W]}, {@code bead [W]}, {@code crimp [W]}. */
+    /** The flange on the joint edge of a tap when the job gives none (common practice, trade-reference §4.3). */
+    public EndAllowance defaultTapFlange() {
+        return new EndAllowance(EndKind.FLANGE, inches(TAP_FLANGE));
+    }
+
+    /**
+     * Reads an end allowance: {@code none}, {@code lap [W]}, {@code bead [W]}, {@code crimp [W]},
+     * {@code flange [W]}.
+     */
     public EndAllowance parseEnd(String text) {
         String[] words = split(text);
         EndKind kind = null;
@@ -98,7 +111,8 @@ public final class AllowanceTable {
             }
         }
         if (kind == null) {
-            throw new IllegalArgumentException("unknown end allowance '" + text + "': use none, lap W, bead W or crimp W");
+            throw new IllegalArgumentException("unknown end allowance '" + text
+                    + "': use none, lap W, bead W, crimp W or flange W");
         }
         if (kind == EndKind.NONE) {
             if (words.length > 1) {
@@ -116,6 +130,7 @@ public final class AllowanceTable {
             case LAP -> inches(LAP_END);
             case BEAD -> inches(BEAD_END);
             case CRIMP -> inches(CRIMP_END);
+            case FLANGE -> inches(TAP_FLANGE);
         };
     }
 

@@ -1,7 +1,7 @@
 package dev.sheetwright.core.fitting;
 
 /** One line of a shop ticket: a fitting of some type, its sizes, quantity and allowances. */
-public sealed interface FittingSpec permits PipeSpec, ReducerSpec {
+public sealed interface FittingSpec permits PipeSpec, ReducerSpec, TeeSpec, TransitionSpec {
 
     /** Unique id of the fitting within the job. */
     String id();
