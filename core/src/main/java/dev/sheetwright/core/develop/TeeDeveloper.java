@@ -336,12 +336,13 @@ public final class TeeDeveloper {
             }
         }
         // the main's top line, from each end to the hole: the branch is lined up on it
-        double bottom = Double.POSITIVE_INFINITY;
-        double top = Double.NEGATIVE_INFINITY;
-        for (double th : new double[] {Math.asin(-x.e() / x.r()), Math.PI - Math.asin(-x.e() / x.r())}) {
-            double at = cy + x.holeU(th);
-            bottom = Math.min(bottom, at);
-            top = Math.max(top, at);
+        // (an offset branch whose axis misses the top line by more than its radius leaves the top line whole)
+        double bottom = length;
+        double top = length;
+        if (Math.abs(x.e()) <= x.r()) {
+            double th0 = Math.asin(-x.e() / x.r());
+            bottom = cy + Math.min(x.holeU(th0), x.holeU(Math.PI - th0));
+            top = cy + Math.max(x.holeU(th0), x.holeU(Math.PI - th0));
         }
         if (bottom > tol.linear()) {
             marks.add(new Mark(MarkKind.CENTRE, new Line(new Point2(cx, 0), new Point2(cx, bottom))));

@@ -180,6 +180,21 @@ class TeeDeveloperTest {
     }
 
     @Test
+    void main_topLineMarks_stopAtTheHole() {
+        // e = 0: the hole crosses the main's top line at hole u = +-3 for the tee 6 on 10 (§4.2 table, s = 0)
+        Development d = net(10, 6, 90, 0, 8);
+        List<dev.sheetwright.core.geom.Mark> centre = d.pieces().get(1).pattern().marks().stream()
+                .filter(m -> m.kind() == dev.sheetwright.core.geom.MarkKind.CENTRE).toList();
+        assertEquals(2, centre.size());
+        assertEquals(24 - 6, centre.get(0).edge().length() + centre.get(1).edge().length(), 1e-9);
+        // a branch offset past its own radius leaves the whole top line to mark
+        Development off = net(20, 4, 90, 5, 14);
+        List<dev.sheetwright.core.geom.Mark> whole = off.pieces().get(1).pattern().marks().stream()
+                .filter(m -> m.kind() == dev.sheetwright.core.geom.MarkKind.CENTRE).toList();
+        assertEquals(24, whole.stream().mapToDouble(m -> m.edge().length()).sum(), 1e-9);
+    }
+
+    @Test
     void tap_withFlangeAndNotches_outlineSimple_branchOnly() {
         AllowanceTable t = AllowanceTable.in(LengthUnit.INCH);
         EndAllowance flange = t.defaultTapFlange();
