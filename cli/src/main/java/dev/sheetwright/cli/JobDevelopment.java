@@ -26,7 +26,7 @@ public final class JobDevelopment {
                 String prefix = "fitting '" + e.fitting() + "', field '" + e.field() + "': ";
                 String msg = e.getMessage().startsWith(prefix) ? e.getMessage().substring(prefix.length())
                         : e.getMessage();
-                throw new JobFileException(file, e.fitting(), e.field(), msg);
+                throw new JobFileException(file, e.fitting(), dev.sheetwright.cli.job.JobReader.jobFieldName(e.field()), msg);
             } catch (IllegalArgumentException e) {
                 throw new JobFileException(file, f.id(), null, e.getMessage());
             }

@@ -8,6 +8,8 @@ import dev.sheetwright.core.fitting.EccentricReducerSpec;
 import dev.sheetwright.core.fitting.ElbowSpec;
 import dev.sheetwright.core.fitting.OffsetSpec;
 import dev.sheetwright.core.fitting.SeamPosition;
+import dev.sheetwright.core.fitting.TeeSpec;
+import dev.sheetwright.core.fitting.TransitionSpec;
 import dev.sheetwright.core.fitting.EndAllowance;
 import dev.sheetwright.core.fitting.FittingException;
 import dev.sheetwright.core.fitting.FittingSpec;
@@ -50,7 +52,7 @@ public final class JobReader {
     private static final Set<String> TOP = Set.of("version", "job", "units", "material", "dimensions",
             "allowances", "fittings", "cutting", "stock", "tolerance", "quote");
     private static final Set<String> COMMON = Set.of("id", "type", "qty", "pieces", "allowances", "note");
-    private static final String TYPES = "pipe, reducer, cone, elbow, offset";
+    private static final String TYPES = "pipe, reducer, cone, elbow, offset, tee, lateral, tap, transition";
 
     private final String file;
     private LengthUnit unit;
@@ -265,11 +267,43 @@ public final class JobReader {
                             ff.notNegative("angle", 0), ff.notNegative("length", 0), ff.notNegative("radius", 0),
                             ff.integer("gores", 0, 2, ElbowSpec.MAX_GORES), seamAt(ff), a, miter);
                 }
+                case "tee", "lateral", "tap": {
+                    ff.allowOnly(union(COMMON, Set.of("main", "branch", "angle", "offset", "length", "main-length",
+                            "with-main", "main-allowances")));
+                    noPieces(ff, pieces);
+                    boolean withMain = !type.equals("tap") && ff.bool("with-main", true);
+                    if (type.equals("lateral") && !ff.has("angle")) {
+                        throw ff.error("angle", "a lateral needs its angle (less than 90 degrees)");
+                    }
+                    Allowances a = fittingAllowances(ff, defaults, "end", "joint");
+                    boolean jointGiven = ff.has("allowances") && ff.map("allowances").has("ends");
+                    if (!withMain && !jointGiven) {
+                        a = a.withEnds(a.endA(), table.defaultTapFlange());
+                    }
+                    Allowances mainAllowances = null;
+                    if (withMain) {
+                        mainAllowances = ff.has("main-allowances")
+                                ? allowances(ff.map("main-allowances"), defaults, "first", "second", true) : defaults;
+                    } else if (ff.has("main-allowances") || ff.has("main-length")) {
+                        throw ff.error(ff.has("main-length") ? "main-length" : "main-allowances",
+                                "a tap has no main piece; remove this field or set with-main: true");
+                    }
+                    double mainLength = withMain ? ff.positive("main-length") : 0;
+                    return new TeeSpec(id, qty, ff.positive("main"), ff.positive("branch"), ff.number("angle", 90),
+                            ff.number("offset", 0), ff.positive("length"), mainLength, withMain, a, mainAllowances);
+                }
+                case "transition": {
+                    ff.allowOnly(union(COMMON, Set.of("width", "depth", "diameter", "height", "offset")));
+                    double[] off = offset(ff);
+                    return new TransitionSpec(id, qty, ff.positive("width"), ff.positive("depth"),
+                            ff.positive("diameter"), ff.positive("height"), off[0], off[1], pieces,
+                            fittingAllowances(ff, defaults, "rect", "round"));
+                }
                 default:
                     throw ff.error("type", "unknown fitting type '" + type + "'; known types: " + TYPES);
             }
         } catch (FittingException e) {
-            throw new JobFileException(file, e.fitting(), e.field(), stripPrefix(e));
+            throw new JobFileException(file, e.fitting(), jobFieldName(e.field()), stripPrefix(e));
         }
     }
 
@@ -320,6 +354,15 @@ public final class JobReader {
             return new double[] {o.number("x", 0), o.number("y", 0)};
         }
         return new double[] {ff.number("offset"), 0};
+    }
+
+    /** The job-file spelling of a spec field named in an engine message ({@code mainLength -> main-length}). */
+    public static String jobFieldName(String field) {
+        return switch (field) {
+            case "miterSeam" -> "allowances.miter";
+            case "offsetX", "offsetY" -> "offset";
+            default -> field.replaceAll("([a-z])([A-Z])", "$1-$2").toLowerCase(Locale.ROOT);
+        };
     }
 
     private static String stripPrefix(FittingException e) {

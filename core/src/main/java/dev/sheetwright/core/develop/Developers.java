@@ -3,6 +3,8 @@ package dev.sheetwright.core.develop;
 import dev.sheetwright.core.fitting.FittingSpec;
 import dev.sheetwright.core.fitting.PipeSpec;
 import dev.sheetwright.core.fitting.ReducerSpec;
+import dev.sheetwright.core.fitting.TeeSpec;
+import dev.sheetwright.core.fitting.TransitionSpec;
 
 /** Picks the development method for each fitting type. */
 public final class Developers {
@@ -25,6 +27,12 @@ public final class Developers {
         }
         if (spec instanceof dev.sheetwright.core.fitting.OffsetSpec o) {
             return OffsetDeveloper.develop(o, ctx);
+        }
+        if (spec instanceof TeeSpec tee) {
+            return TeeDeveloper.develop(tee, ctx);
+        }
+        if (spec instanceof TransitionSpec transition) {
+            return TransitionDeveloper.develop(transition, ctx);
         }
         throw new IllegalArgumentException("no development method for fitting type " + spec.type());
     }

@@ -35,6 +35,11 @@ public final class AllowanceTable {
      * riveted or screwed and sealed (common practice; lap rule [S:NAVY ch.2], trade-reference §3.4).
      */
     static final double ELBOW_MITER_LAP = 0.25;
+    /**
+     * Tap flange turned out on the joint edge of a tap, 1/2 in (common practice: taps get tab or flange
+     * allowances, trade-reference §4.3 and §6; the width is a shop default, verify on the job).
+     */
+    static final double TAP_FLANGE = 0.5;
 
     private final LengthUnit unit;
 
@@ -98,7 +103,15 @@ public final class AllowanceTable {
         return seam(kind, w);
     }
 
-    /** Reads an end allowance: {@code none}, {@code lap [W]}, {@code bead [W]}, {@code crimp [W]}. */
+    /** The flange on the joint edge of a tap when the job gives none (common practice, trade-reference §4.3). */
+    public EndAllowance defaultTapFlange() {
+        return new EndAllowance(EndKind.FLANGE, inches(TAP_FLANGE));
+    }
+
+    /**
+     * Reads an end allowance: {@code none}, {@code lap [W]}, {@code bead [W]}, {@code crimp [W]},
+     * {@code flange [W]}.
+     */
     public EndAllowance parseEnd(String text) {
         String[] words = split(text);
         EndKind kind = null;
@@ -108,7 +121,8 @@ public final class AllowanceTable {
             }
         }
         if (kind == null) {
-            throw new IllegalArgumentException("unknown end allowance '" + text + "': use none, lap W, bead W or crimp W");
+            throw new IllegalArgumentException("unknown end allowance '" + text
+                    + "': use none, lap W, bead W, crimp W or flange W");
         }
         if (kind == EndKind.NONE) {
             if (words.length > 1) {
@@ -126,6 +140,7 @@ public final class AllowanceTable {
             case LAP -> inches(LAP_END);
             case BEAD -> inches(BEAD_END);
             case CRIMP -> inches(CRIMP_END);
+            case FLANGE -> inches(TAP_FLANGE);
         };
     }
 

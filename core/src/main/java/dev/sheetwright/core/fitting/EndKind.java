@@ -5,7 +5,9 @@ public enum EndKind {
     NONE("none"),
     LAP("lap"),
     BEAD("bead"),
-    CRIMP("crimp");
+    CRIMP("crimp"),
+    /** A strip turned out at the end, e.g. the flange of a tap that is fastened to the main. */
+    FLANGE("flange");
 
     private final String word;
 

@@ -1,7 +1,8 @@
 package dev.sheetwright.core.fitting;
 
 /** One line of a shop ticket: a fitting of some type, its sizes, quantity and allowances. */
-public sealed interface FittingSpec permits PipeSpec, ReducerSpec, EccentricReducerSpec, ElbowSpec, OffsetSpec {
+public sealed interface FittingSpec permits PipeSpec, ReducerSpec, EccentricReducerSpec, ElbowSpec, OffsetSpec,
+        TeeSpec, TransitionSpec {
 
     /** Unique id of the fitting within the job. */
     String id();
