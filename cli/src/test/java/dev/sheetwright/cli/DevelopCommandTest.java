@@ -58,8 +58,26 @@ class DevelopCommandTest {
             Map<String, Object> f = r.file(0);
             assertEquals(0, ((Map<String, Object>) f.get("audit")).get("errors"));
             assertEquals(1, f.get("outer_contours"), piece.get("file").asText());
+            assertEquals(piece.get("holes").asInt(), f.get("holes"), piece.get("file").asText());
             assertEquals(piece.get("cutLength").asDouble(), ((Number) f.get("cut_length")).doubleValue(), 1e-3);
         }
+    }
+
+    @Test
+    void develop_demoJob_holdsEveryFittingType_teeMainHasItsHole() throws Exception {
+        Path out = tmp.resolve("out");
+        assertEquals(0, CommandRun.of("develop", Fixtures.path("demo-bakery.yaml").toString(), "-o",
+                out.toString()).exitCode());
+        JsonNode doc = new ObjectMapper().readTree(out.resolve("patterns.json").toFile());
+        java.util.Set<String> types = new java.util.TreeSet<>();
+        for (JsonNode piece : doc.get("pieces")) {
+            types.add(piece.get("type").asText());
+            if (piece.get("piece").asText().equals("main")) {
+                assertEquals(1, piece.get("holes").asInt(), "the main of a tee carries the intersection hole");
+            }
+        }
+        assertEquals(java.util.Set.of("pipe", "reducer", "eccentric-reducer", "elbow", "offset", "tee", "lateral",
+                "tap", "transition"), types);
     }
 
     @Test

@@ -57,6 +57,7 @@ public final class PatternsJson {
                 e.put("file", partFile(p) + ".dxf");
                 e.put("area", p.area());
                 e.put("cutLength", p.cutLength());
+                e.put("holes", p.holes().size());
                 e.put("width", b.width());
                 e.put("height", b.height());
                 Map<String, Object> layout = new LinkedHashMap<>();
