@@ -122,7 +122,9 @@ public final class NestCommand implements Callable<Integer> {
             try {
                 write(job, nest, plan);
             } catch (RuntimeException e) {
-                rack.abandon();
+                if (rack != null) {
+                    rack.abandon();
+                }
                 throw e;
             }
             print(nest, NestJson.document(nest, plan), (System.nanoTime() - start) / 1e9);
