@@ -12,13 +12,18 @@ import dev.sheetwright.dxf.DxfWriter;
 import dev.sheetwright.nest.model.NestOptions;
 import dev.sheetwright.nest.model.SheetLayout;
 import dev.sheetwright.nest.model.Unplaced;
+import dev.sheetwright.cli.mixin.InventoryOption;
+import dev.sheetwright.core.job.StockRemnant;
 import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -50,13 +55,57 @@ public final class NestCommand implements Callable<Integer> {
     @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "search seed (default ${DEFAULT-VALUE})")
     long seed;
 
+    @Option(names = "--use-remnants",
+            description = "cut from the rack first: every available remnant of the job's material and gauge (or"
+                    + " thickness) in the inventory is offered before sheets, reserved for this plan while nesting")
+    boolean useRemnants;
+
+    @Option(names = "--remnant", paramLabel = "ID",
+            description = "offer this rack remnant (e.g. R-0042) before sheets; repeat for more; it must be the"
+                    + " job's material")
+    List<String> remnantIds = new ArrayList<>();
+
+    @Mixin
+    InventoryOption inventory;
+
+    @Option(names = "--reserve-minutes", defaultValue = "15", paramLabel = "MIN",
+            description = "how long the plan holds its remnants before another planner may take them"
+                    + " (default ${DEFAULT-VALUE}; commit within that time)")
+    long reserveMinutes;
+
+    @Option(names = "--min-offcut-width", paramLabel = "L",
+            description = "narrowest offcut recorded on the rack, job units (default 12 in or 300 mm)")
+    Double minOffcutWidth;
+
+    @Option(names = "--min-offcut-area", paramLabel = "A",
+            description = "smallest offcut area recorded on the rack, square job units (default 144 in2 or"
+                    + " 100000 mm2)")
+    Double minOffcutArea;
+
+    @Option(names = "--commit",
+            description = "commit the plan right after nesting: mark the remnants cut as used and record the new"
+                    + " offcuts (else run 'sheetwright commit OUT' later)")
+    boolean commitNow;
+
+    @Option(names = "--location", paramLabel = "TEXT", defaultValue = "",
+            description = "with --commit: where the new offcuts are put on the rack")
+    String location;
+
     @Override
     public Integer call() {
         if (!(seconds >= 0) || seconds > 86400) {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(),
                     "--time must be from 0 to 86400 seconds, got " + seconds);
         }
+        if (reserveMinutes < 1 || reserveMinutes > 24 * 60) {
+            throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+                    "--reserve-minutes must be from 1 to 1440, got " + reserveMinutes);
+        }
         Job job = JobReader.read(jobFile);
+        MinOffcut defaults = MinOffcut.defaults(job.unit());
+        MinOffcut min = new MinOffcut(minOffcutWidth != null ? minOffcutWidth : defaults.width(),
+                minOffcutArea != null ? minOffcutArea : defaults.area());
+        boolean planned = useRemnants || !remnantIds.isEmpty() || commitNow || inventory.given();
         PrintWriter err = spec.commandLine().getErr();
         Progress progress = Progress.forTerminal(err, seconds);
         NestOptions options = iterations != null
@@ -64,12 +113,39 @@ public final class NestCommand implements Callable<Integer> {
                 : new NestOptions(Duration.ofMillis((long) (seconds * 1000)), java.util.OptionalLong.empty(), seed, 2,
                         progress);
         long start = System.nanoTime();
-        JobNest nest = JobNest.run(job, jobFile.toString(), options);
-        progress.done();
-        Map<String, Object> doc = NestJson.document(nest);
+        try (RackPlanning rack = planned
+                ? RackPlanning.open(inventory.file(), job, Duration.ofMinutes(reserveMinutes)) : null) {
+            List<StockRemnant> fromRack = rack == null ? List.of() : rack.reserve(useRemnants, remnantIds);
+            JobNest nest = JobNest.run(job, jobFile.toString(), options, fromRack);
+            progress.done();
+            RackPlan plan = rack == null ? null : rack.settle(nest, min);
+            try {
+                write(job, nest, plan);
+            } catch (RuntimeException e) {
+                if (rack != null) {
+                    rack.abandon();
+                }
+                throw e;
+            }
+            print(nest, NestJson.document(nest, plan), (System.nanoTime() - start) / 1e9);
+            if (plan != null) {
+                PlanReport.planned(spec.commandLine().getOut(), plan, out);
+                if (commitNow) {
+                    PlanReport.committed(spec.commandLine().getOut(), plan,
+                            RackCommit.commit(rack.store(), plan, location));
+                }
+            }
+            return nest.result().unplaced().isEmpty() ? ExitCodes.OK : ExitCodes.UNPLACED;
+        }
+    }
+
+    private void write(Job job, JobNest nest, RackPlan plan) {
+        Map<String, Object> doc = NestJson.document(nest, plan);
         try (OutputFolder folder = OutputFolder.stage(out)) {
             for (SheetLayout s : nest.result().sheets()) {
-                Drawing d = SheetDrawings.drawing(s, nest.plan(), job.name(), job.unit());
+                RackPlan.PlannedOffcut id = plan == null ? null : plan.offcutOfSheet(s.index() + 1);
+                Drawing d = SheetDrawings.drawing(s, nest.plan(), job.name(), job.unit(), nest.offcut(s),
+                        id == null ? null : id.id());
                 DxfWriter.write(d, folder.file(NestJson.sheetFile(s) + ".dxf"));
                 PatternDrawings.svgWriter(true).write(d, folder.file(NestJson.sheetFile(s) + ".svg"));
             }
@@ -77,8 +153,6 @@ public final class NestCommand implements Callable<Integer> {
             PatternsJson.write(PatternsJson.document(job, nest.developments()), folder.file("patterns.json"));
             folder.commit();
         }
-        print(nest, doc, (System.nanoTime() - start) / 1e9);
-        return nest.result().unplaced().isEmpty() ? ExitCodes.OK : ExitCodes.UNPLACED;
     }
 
     @SuppressWarnings("unchecked")
@@ -92,8 +166,8 @@ public final class NestCommand implements Callable<Integer> {
         for (SheetLayout s : nest.result().sheets()) {
             w.printf(Locale.ROOT, "  sheet %3d  %-14s %3d parts  %5.1f %%%s%n", s.index() + 1, s.stock().label(),
                     s.parts().size(), 100 * s.utilization(),
-                    s.offcut() == null ? "" : String.format(Locale.ROOT, "  offcut %.2f x %.2f %s",
-                            s.offcut().width(), s.offcut().height(), u));
+                    nest.offcut(s) == null ? "" : String.format(Locale.ROOT, "  offcut %.2f x %.2f %s",
+                            nest.offcut(s).width(), nest.offcut(s).height(), u));
         }
         for (Unplaced up : nest.result().unplaced()) {
             w.printf(Locale.ROOT, "  NOT PLACED %s %s #%d: %s%n", up.fitting(), up.piece(), up.copy(), up.reason());

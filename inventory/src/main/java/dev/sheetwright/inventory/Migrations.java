@@ -30,6 +30,26 @@ final class Migrations {
             "CREATE INDEX remnant_by_state ON remnant (state, material)",
             "CREATE INDEX remnant_by_plan ON remnant (reserved_by)"));
 
+    /**
+     * Plans that nest against the rack: a plan row is made when a nest is settled (its remnants held and ids for
+     * its new offcuts handed out) and is marked committed once; {@code plan_offcut_id} holds the ids handed out,
+     * so labels etched at nest time match the records made at commit.
+     */
+    static final Migration V2 = new Migration(2, "plans and offcut ids held by plans", List.of(
+            """
+            CREATE TABLE plan (
+                id         TEXT PRIMARY KEY,
+                job        TEXT NOT NULL,
+                made       TEXT NOT NULL,
+                committed  TEXT
+            )""",
+            """
+            CREATE TABLE plan_offcut_id (
+                seq      INTEGER PRIMARY KEY,
+                plan_id  TEXT NOT NULL REFERENCES plan (id)
+            )""",
+            "CREATE INDEX plan_offcut_id_by_plan ON plan_offcut_id (plan_id)"));
+
     /** All migrations, in version order. */
-    static final List<Migration> ALL = List.of(V1);
+    static final List<Migration> ALL = List.of(V1, V2);
 }

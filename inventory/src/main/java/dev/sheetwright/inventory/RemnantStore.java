@@ -16,7 +16,9 @@ import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.Collection;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
@@ -40,6 +42,8 @@ public final class RemnantStore implements AutoCloseable {
     public static final Duration BUSY_TIMEOUT = Duration.ofSeconds(30);
     /** Longest reservation accepted. */
     public static final Duration MAX_TTL = Duration.ofDays(30);
+    /** Most offcut ids one plan may hold. */
+    public static final int MAX_OFFCUTS_PER_PLAN = 10_000;
 
     private static final String COLUMNS = "seq, material, gauge, thickness_mm, outline, location, added, source,"
             + " state, reserved_by, reserved_until";
@@ -261,9 +265,7 @@ public final class RemnantStore implements AutoCloseable {
     public synchronized List<Remnant> reserve(RemnantFilter filter, String planId, Duration ttl, int maxCount) {
         requireNonNull("filter", filter);
         checkPlanId(planId);
-        if (ttl == null || ttl.isNegative() || ttl.isZero() || ttl.compareTo(MAX_TTL) > 0) {
-            throw new IllegalArgumentException("ttl: " + ttl + " is out of range; must be > 0 and at most " + MAX_TTL);
-        }
+        checkTtl(ttl);
         if (maxCount < 0) {
             throw new IllegalArgumentException("maxCount: " + maxCount + " is out of range; must be >= 0");
         }
@@ -324,25 +326,7 @@ public final class RemnantStore implements AutoCloseable {
             }
         }
         return transaction(() -> {
-            for (long seq : seqs) {
-                Remnant r = get(seq).orElseThrow(() -> noSuch(seq));
-                if (r.state() == RemnantState.USED) {
-                    throw new RemnantConflictException(r.id() + " is already used; plan " + planId
-                            + " cannot cut it again");
-                }
-                if (r.state() != RemnantState.RESERVED || !planId.equals(r.reservedBy())) {
-                    String now = r.state() == RemnantState.AVAILABLE ? "it is available"
-                            : "it is reserved by plan " + r.reservedBy() + " until " + r.reservedUntil();
-                    throw new RemnantConflictException(r.id() + " is not reserved by plan " + planId + " (" + now
-                            + "); reserve it before committing");
-                }
-                int n = update("UPDATE remnant SET state = 'used', reserved_by = NULL, reserved_until = NULL"
-                        + " WHERE seq = ? AND state = 'reserved' AND reserved_by = ?", List.of(seq, planId));
-                if (n != 1) {
-                    throw new IllegalStateException("commit: " + r.id() + " changed during the transaction");
-                }
-                faults.reached("commit:used " + r.id());
-            }
+            markUsed(planId, seqs);
             update("UPDATE remnant SET state = 'available', reserved_by = NULL, reserved_until = NULL"
                     + " WHERE state = 'reserved' AND reserved_by = ?", List.of(planId));
             List<Remnant> added = new ArrayList<>();
@@ -353,6 +337,223 @@ public final class RemnantStore implements AutoCloseable {
             }
             return List.copyOf(added);
         });
+    }
+
+    /** Marks {@code seqs} used; each must be reserved by {@code planId} (an expired lease nobody took counts). */
+    private void markUsed(String planId, Set<Long> seqs) throws SQLException {
+        for (long seq : seqs) {
+            Remnant r = get(seq).orElseThrow(() -> noSuch(seq));
+            if (r.state() == RemnantState.USED) {
+                throw new RemnantConflictException(r.id() + " is already used; plan " + planId
+                        + " cannot cut it again");
+            }
+            if (r.state() != RemnantState.RESERVED || !planId.equals(r.reservedBy())) {
+                String now = r.state() == RemnantState.AVAILABLE ? "it is available"
+                        : "it is reserved by plan " + r.reservedBy() + " until " + r.reservedUntil();
+                throw new RemnantConflictException(r.id() + " is not reserved by plan " + planId + " (" + now
+                        + "); reserve it before committing");
+            }
+            int n = update("UPDATE remnant SET state = 'used', reserved_by = NULL, reserved_until = NULL"
+                    + " WHERE seq = ? AND state = 'reserved' AND reserved_by = ?", List.of(seq, planId));
+            if (n != 1) {
+                throw new IllegalStateException("commit: " + r.id() + " changed during the transaction");
+            }
+            faults.reached("commit:used " + r.id());
+        }
+    }
+
+    // ---------------------------------------------------------------- plans
+
+    /**
+     * Reserves exactly the remnants {@code ids} for {@code planId} until now + {@code ttl}: all of them or none.
+     *
+     * @return every remnant now reserved for the plan, by id
+     * @throws IllegalArgumentException if an id is malformed or not in the inventory
+     * @throws RemnantConflictException if one is used, or reserved by another plan whose lease has not expired
+     */
+    public synchronized List<Remnant> reserveIds(Collection<String> ids, String planId, Duration ttl) {
+        requireNonNull("ids", ids);
+        checkPlanId(planId);
+        checkTtl(ttl);
+        Set<Long> seqs = new TreeSet<>();
+        for (String id : ids) {
+            seqs.add(RemnantId.parse(id));
+        }
+        return transaction(() -> {
+            Instant now = now();
+            long until = now.toEpochMilli() + ttl.toMillis();
+            for (long seq : seqs) {
+                Remnant r = get(seq).orElseThrow(() -> noSuch(seq));
+                if (r.state() == RemnantState.USED) {
+                    throw new RemnantConflictException(r.id() + " is already used; it cannot be planned again");
+                }
+                if (!r.isFreeAt(now) && !planId.equals(r.reservedBy())) {
+                    throw new RemnantConflictException(r.id() + " is reserved by plan " + r.reservedBy() + " until "
+                            + r.reservedUntil() + "; wait for that plan or choose another remnant");
+                }
+                update("UPDATE remnant SET state = 'reserved', reserved_by = ?, reserved_until = ? WHERE seq = ?",
+                        List.of(planId, until, seq));
+            }
+            return reservedFor(planId);
+        });
+    }
+
+    /**
+     * Settles a plan once its nest is made, in one transaction: keeps the remnants {@code usedIds} reserved for
+     * it (renewed until now + {@code ttl}), returns its other reservations to the rack, records the plan for
+     * {@code job}, and hands out {@code offcutCount} new ids held by the plan for the offcuts it will leave, so
+     * they can be etched on the sheets before the plan is committed. Ids handed out are never issued again,
+     * whether or not the plan is committed.
+     *
+     * @throws IllegalArgumentException if an id is malformed or not in the inventory
+     * @throws RemnantConflictException if the plan was settled before, or a used remnant is no longer reserved
+     *                                  by it (its lease expired and another plan took it)
+     */
+    public synchronized PlanHold hold(String planId, String job, Set<String> usedIds, int offcutCount, Duration ttl) {
+        checkPlanId(planId);
+        requireNonNull("usedIds", usedIds);
+        checkTtl(ttl);
+        RemnantSource.job(job, 1); // checks the job name the way offcut sources will carry it
+        if (offcutCount < 0 || offcutCount > MAX_OFFCUTS_PER_PLAN) {
+            throw new IllegalArgumentException("offcutCount: " + offcutCount + " is out of range; must be 0 to "
+                    + MAX_OFFCUTS_PER_PLAN);
+        }
+        Set<Long> seqs = new TreeSet<>();
+        for (String id : usedIds) {
+            seqs.add(RemnantId.parse(id));
+        }
+        return transaction(() -> {
+            if (plan(planId).isPresent()) {
+                throw new RemnantConflictException("plan " + planId + " was settled before; make a new plan");
+            }
+            Instant now = now();
+            long until = now.toEpochMilli() + ttl.toMillis();
+            List<Remnant> kept = new ArrayList<>();
+            for (long seq : seqs) {
+                Remnant r = get(seq).orElseThrow(() -> noSuch(seq));
+                if (r.state() != RemnantState.RESERVED || !planId.equals(r.reservedBy())) {
+                    String state = r.state() == RemnantState.RESERVED
+                            ? "reserved by plan " + r.reservedBy() + " until " + r.reservedUntil() : r.state().word();
+                    throw new RemnantConflictException(r.id() + " is no longer reserved by plan " + planId + " (it is "
+                            + state + "); its reservation ran out while nesting; nest again");
+                }
+                update("UPDATE remnant SET reserved_until = ? WHERE seq = ?", List.of(until, seq));
+                kept.add(get(seq).orElseThrow());
+            }
+            List<Object> args = new ArrayList<>();
+            args.add(planId);
+            StringBuilder keep = new StringBuilder();
+            for (long seq : seqs) {
+                keep.append(keep.length() == 0 ? "" : ", ").append('?');
+                args.add(seq);
+            }
+            update("UPDATE remnant SET state = 'available', reserved_by = NULL, reserved_until = NULL"
+                    + " WHERE state = 'reserved' AND reserved_by = ?"
+                    + (seqs.isEmpty() ? "" : " AND seq NOT IN (" + keep + ")"), args);
+            update("INSERT INTO plan (id, job, made, committed) VALUES (?, ?, ?, NULL)",
+                    List.of(planId, RemnantSource.job(job, 1).job(), now.toString()));
+            long issued = highestIssued();
+            List<String> ids = new ArrayList<>();
+            for (int i = 1; i <= offcutCount; i++) {
+                update("INSERT INTO plan_offcut_id (seq, plan_id) VALUES (?, ?)", List.of(issued + i, planId));
+                ids.add(RemnantId.format(issued + i));
+            }
+            if (offcutCount > 0) {
+                int n = update("UPDATE sqlite_sequence SET seq = ? WHERE name = 'remnant'", List.of(issued + offcutCount));
+                if (n == 0) {
+                    update("INSERT INTO sqlite_sequence (name, seq) VALUES ('remnant', ?)", List.of(issued + offcutCount));
+                }
+            }
+            return new PlanHold(planId, List.copyOf(kept), List.copyOf(ids), Instant.ofEpochMilli(until));
+        });
+    }
+
+    /**
+     * Commits a settled plan in one transaction: marks {@code usedIds} used, returns the plan's other
+     * reservations to the rack, records each of {@code offcuts} as {@code available} under the id the plan
+     * holds for it, and marks the plan committed. A plan is committed at most once. If anything is refused or
+     * fails, nothing changes.
+     *
+     * @param offcuts the new offcuts by the ids {@link #hold} handed out (some ids may be left out; they stay unused)
+     * @return the new offcuts' records, in the order given
+     * @throws IllegalArgumentException if the plan is not in this inventory or an offcut id is not held by it
+     * @throws RemnantConflictException if the plan was already committed, or a used remnant is not (or no longer)
+     *                                  reserved by it
+     */
+    public synchronized List<Remnant> commitPlan(String planId, Set<String> usedIds, Map<String, NewRemnant> offcuts) {
+        checkPlanId(planId);
+        requireNonNull("usedIds", usedIds);
+        requireNonNull("offcuts", offcuts);
+        Set<Long> seqs = new TreeSet<>();
+        for (String id : usedIds) {
+            seqs.add(RemnantId.parse(id));
+        }
+        Map<Long, NewRemnant> bySeq = new LinkedHashMap<>();
+        for (Map.Entry<String, NewRemnant> e : offcuts.entrySet()) {
+            requireNonNull("offcut " + e.getKey(), e.getValue());
+            bySeq.put(RemnantId.parse(e.getKey()), e.getValue());
+        }
+        return transaction(() -> {
+            PlanRecord plan = plan(planId).orElseThrow(() -> new IllegalArgumentException("plan " + planId
+                    + " is not in " + file + "; commit it to the inventory it was nested against"));
+            if (plan.committed() != null) {
+                throw new RemnantConflictException("plan " + planId + " was already committed at " + plan.committed()
+                        + "; nothing was changed");
+            }
+            markUsed(planId, seqs);
+            update("UPDATE remnant SET state = 'available', reserved_by = NULL, reserved_until = NULL"
+                    + " WHERE state = 'reserved' AND reserved_by = ?", List.of(planId));
+            Instant now = now();
+            List<Remnant> added = new ArrayList<>();
+            for (Map.Entry<Long, NewRemnant> e : bySeq.entrySet()) {
+                String id = RemnantId.format(e.getKey());
+                List<String> holder = new ArrayList<>();
+                try (PreparedStatement p = db.prepareStatement("SELECT plan_id FROM plan_offcut_id WHERE seq = ?")) {
+                    p.setLong(1, e.getKey());
+                    try (ResultSet rs = p.executeQuery()) {
+                        while (rs.next()) {
+                            holder.add(rs.getString(1));
+                        }
+                    }
+                }
+                if (!holder.equals(List.of(planId))) {
+                    throw new IllegalArgumentException("offcut id " + id + " is not held by plan " + planId);
+                }
+                if (get(e.getKey()).isPresent()) {
+                    throw new IllegalStateException("commit: " + id + " is already recorded");
+                }
+                added.add(get(insert(e.getValue(), e.getKey(), now, RemnantState.AVAILABLE)).orElseThrow());
+                faults.reached("commit:offcut " + added.size());
+            }
+            update("UPDATE plan SET committed = ? WHERE id = ?", List.of(now.toString(), planId));
+            return List.copyOf(added);
+        });
+    }
+
+    /** The plan {@code planId} as recorded by {@link #hold}, if this inventory has it. */
+    public synchronized Optional<PlanRecord> findPlan(String planId) {
+        checkPlanId(planId);
+        return read(() -> plan(planId));
+    }
+
+    private Optional<PlanRecord> plan(String planId) throws SQLException {
+        try (PreparedStatement p = db.prepareStatement("SELECT id, job, made, committed FROM plan WHERE id = ?")) {
+            p.setString(1, planId);
+            try (ResultSet rs = p.executeQuery()) {
+                if (!rs.next()) {
+                    return Optional.empty();
+                }
+                String committed = rs.getString("committed");
+                return Optional.of(new PlanRecord(rs.getString("id"), rs.getString("job"),
+                        Instant.parse(rs.getString("made")), committed == null ? null : Instant.parse(committed)));
+            }
+        }
+    }
+
+    private static void checkTtl(Duration ttl) {
+        if (ttl == null || ttl.isNegative() || ttl.isZero() || ttl.compareTo(MAX_TTL) > 0) {
+            throw new IllegalArgumentException("ttl: " + ttl + " is out of range; must be > 0 and at most " + MAX_TTL);
+        }
     }
 
     // ---------------------------------------------------------------- CSV

@@ -22,6 +22,8 @@ final class InventorySnapshot {
             dump(s, "SELECT * FROM remnant ORDER BY seq", rows);
             dump(s, "SELECT name, seq FROM sqlite_sequence ORDER BY name", rows);
             dump(s, "SELECT * FROM schema_version ORDER BY version", rows);
+            dump(s, "SELECT * FROM plan ORDER BY id", rows);
+            dump(s, "SELECT * FROM plan_offcut_id ORDER BY seq", rows);
         } catch (SQLException e) {
             throw new IllegalStateException(e);
         }

@@ -24,17 +24,20 @@ class RemnantStoreTest {
     }
 
     @Test
-    void open_emptyFolder_createsFolderFileAndSchemaV1() {
+    void open_emptyFolder_createsFolderFileAndLatestSchema() {
         Path file = dir.resolve("deep/er/remnants.db");
 
         try (RemnantStore store = RemnantStore.open(file)) {
             assertTrue(Files.isRegularFile(file));
-            assertEquals(1, store.schemaVersion());
+            assertEquals(Migrations.ALL.size(), store.schemaVersion());
             assertEquals(List.of(), store.list(RemnantFilter.any(), RemnantSort.ID));
         }
         List<String> snapshot = InventorySnapshot.of(file);
-        assertEquals(1, snapshot.stream().filter(r -> r.startsWith("version=")).count());
-        assertTrue(snapshot.get(0).startsWith("version=1 description=initial schema"), snapshot.toString());
+        assertEquals(Migrations.ALL.size(), snapshot.stream().filter(r -> r.startsWith("version=")).count());
+        assertTrue(snapshot.stream().anyMatch(r -> r.startsWith("version=1 description=initial schema")),
+                snapshot.toString());
+        assertTrue(snapshot.stream().anyMatch(r -> r.startsWith("version=2 description=plans and offcut ids")),
+                snapshot.toString());
     }
 
     @Test
@@ -48,7 +51,7 @@ class RemnantStoreTest {
         clock.advance(java.time.Duration.ofDays(1));
 
         try (RemnantStore store = RemnantStore.open(file, clock)) {
-            assertEquals(1, store.schemaVersion());
+            assertEquals(Migrations.ALL.size(), store.schemaVersion());
             assertEquals(1, store.list(RemnantFilter.any(), RemnantSort.ID).size());
         }
 
@@ -61,17 +64,17 @@ class RemnantStoreTest {
         try (RemnantStore store = RemnantStore.open(file)) {
             store.add(galv(1200, 600, "A1"));
         }
-        Migration v2 = new Migration(2, "add note column",
+        Migration v3 = new Migration(3, "add note column",
                 List.of("ALTER TABLE remnant ADD COLUMN note TEXT NOT NULL DEFAULT ''"));
 
         try (RemnantStore store = RemnantStore.open(file, java.time.Clock.systemUTC(),
-                List.of(Migrations.V1, v2), RemnantStore.FaultPoint.NONE)) {
-            assertEquals(2, store.schemaVersion());
+                List.of(Migrations.V1, Migrations.V2, v3), RemnantStore.FaultPoint.NONE)) {
+            assertEquals(3, store.schemaVersion());
             assertEquals("A1", store.get("R-0001").orElseThrow().location());
         }
         List<String> snapshot = InventorySnapshot.of(file);
         assertTrue(snapshot.get(0).contains("note="), snapshot.get(0));
-        assertEquals(2, snapshot.stream().filter(r -> r.startsWith("version=")).count());
+        assertEquals(3, snapshot.stream().filter(r -> r.startsWith("version=")).count());
     }
 
     @Test
@@ -82,7 +85,7 @@ class RemnantStoreTest {
 
         InventoryStorageException e = assertThrows(InventoryStorageException.class, () -> RemnantStore.open(file));
 
-        assertEquals("inventory: " + file + " has schema version 7; this program knows versions up to 1",
+        assertEquals("inventory: " + file + " has schema version 7; this program knows versions up to 2",
                 e.getMessage());
     }
 

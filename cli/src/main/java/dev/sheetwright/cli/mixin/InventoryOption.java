@@ -1,6 +1,7 @@
 package dev.sheetwright.cli.mixin;
 
 import dev.sheetwright.inventory.RemnantStore;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import picocli.CommandLine.Option;
 
@@ -15,8 +16,27 @@ public final class InventoryOption {
         return file != null ? file : RemnantStore.defaultPath();
     }
 
+    /** True when {@code --inventory} was given. */
+    public boolean given() {
+        return file != null;
+    }
+
     /** Opens the inventory. */
     public RemnantStore open() {
         return RemnantStore.open(file());
+    }
+
+    /**
+     * Opens an inventory that must already exist: planning and committing never create one, so a mistyped path
+     * is refused instead of silently starting an empty rack.
+     *
+     * @throws IllegalArgumentException naming the file when there is none
+     */
+    public static RemnantStore openExisting(Path file) {
+        if (!Files.isRegularFile(file)) {
+            throw new IllegalArgumentException("--inventory " + file + ": no inventory there; check the path, or"
+                    + " start one with 'sheetwright remnant add ... --inventory " + file + "'");
+        }
+        return RemnantStore.open(file);
     }
 }

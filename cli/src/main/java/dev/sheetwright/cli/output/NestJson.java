@@ -2,7 +2,9 @@ package dev.sheetwright.cli.output;
 
 import dev.sheetwright.cli.Cautions;
 import dev.sheetwright.cli.JobNest;
+import dev.sheetwright.cli.RackPlan;
 import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.Offcut;
 import dev.sheetwright.nest.model.Placement;
 import dev.sheetwright.nest.model.Remnant;
 import dev.sheetwright.nest.model.Sheet;
@@ -24,6 +26,15 @@ public final class NestJson {
     }
 
     public static Map<String, Object> document(JobNest nest) {
+        return document(nest, null);
+    }
+
+    /**
+     * The document; each sheet's {@code offcut} is its clean offcut (with the rack id it will get, if
+     * {@code rack} records it), and {@code plan} is the rack plan, or null when the nest was not planned
+     * against the rack.
+     */
+    public static Map<String, Object> document(JobNest nest, RackPlan rack) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("job", nest.job().name());
         doc.put("units", nest.job().unit().symbol());
@@ -62,12 +73,17 @@ public final class NestJson {
                 parts.add(pe);
             }
             e.put("parts", parts);
-            if (s.offcut() != null) {
+            Offcut clean = nest.offcut(s);
+            if (clean != null) {
                 Map<String, Object> o = new LinkedHashMap<>();
-                o.put("x", s.offcut().x());
-                o.put("y", s.offcut().y());
-                o.put("width", s.offcut().width());
-                o.put("height", s.offcut().height());
+                RackPlan.PlannedOffcut planned = rack == null ? null : rack.offcutOfSheet(s.index() + 1);
+                if (planned != null) {
+                    o.put("id", planned.id());
+                }
+                o.put("x", clean.x());
+                o.put("y", clean.y());
+                o.put("width", clean.width());
+                o.put("height", clean.height());
                 e.put("offcut", o);
             } else {
                 e.put("offcut", null);
@@ -93,6 +109,7 @@ public final class NestJson {
         totals.put("stockArea", stockArea);
         totals.put("utilization", stockArea > 0 ? partArea / stockArea : 0);
         doc.put("totals", totals);
+        doc.put("plan", rack == null ? null : rack.toJson());
         doc.put("cautions", Cautions.ALL);
         return doc;
     }

@@ -10,6 +10,7 @@ import dev.sheetwright.dxf.Vertex;
 import dev.sheetwright.nest.jobs.JobNestRequest;
 import dev.sheetwright.nest.jobs.PatternShapes;
 import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.Offcut;
 import dev.sheetwright.nest.model.Placement;
 import dev.sheetwright.nest.model.Remnant;
 import dev.sheetwright.nest.model.Sheet;
@@ -26,6 +27,16 @@ public final class SheetDrawings {
     }
 
     public static Drawing drawing(SheetLayout sheet, JobNestRequest plan, String jobName, LengthUnit unit) {
+        return drawing(sheet, plan, jobName, unit, sheet.offcut(), null);
+    }
+
+    /**
+     * The cut program of one sheet. When {@code offcut} is given it is labelled on layer {@code LABEL} with its
+     * size, starting at a point inside it; {@code offcutId} (the rack id it will be recorded under, or null) leads
+     * the label so the id is etched or marked on the metal and the rack matches the records.
+     */
+    public static Drawing drawing(SheetLayout sheet, JobNestRequest plan, String jobName, LengthUnit unit,
+            Offcut offcut, String offcutId) {
         List<Shape> shapes = new ArrayList<>();
         shapes.add(stockOutline(sheet));
         for (Placement pl : sheet.parts()) {
@@ -33,11 +44,12 @@ public final class SheetDrawings {
             shapes.addAll(PatternDrawings.shapes(p, List.of(pl.fitting() + " " + pl.piece() + " #" + pl.copy()),
                     unit));
         }
-        if (sheet.offcut() != null) {
-            double h = unit == LengthUnit.INCH ? 0.5 : 12;
-            shapes.add(new Text(PatternDrawings.LABEL, sheet.offcut().x() + h, sheet.offcut().y() + h, h,
-                    String.format(Locale.ROOT, "OFFCUT %.2f x %.2f %s  %s sheet %d", sheet.offcut().width(),
-                            sheet.offcut().height(), unit.symbol(), jobName, sheet.index() + 1)));
+        if (offcut != null && offcut.width() > 0 && offcut.height() > 0) {
+            double h = Math.min(unit == LengthUnit.INCH ? 0.5 : 12, Math.min(offcut.width(), offcut.height()) / 4);
+            shapes.add(new Text(PatternDrawings.LABEL, offcut.x() + h, offcut.y() + h, h,
+                    (offcutId == null ? "" : offcutId + "  ")
+                    + String.format(Locale.ROOT, "OFFCUT %.2f x %.2f %s  %s sheet %d", offcut.width(),
+                            offcut.height(), unit.symbol(), jobName, sheet.index() + 1)));
         }
         return Drawing.of(unit.symbol(), PatternDrawings.LAYERS, shapes);
     }

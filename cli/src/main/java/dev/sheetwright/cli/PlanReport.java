@@ -1,0 +1,34 @@
+package dev.sheetwright.cli;
+
+import dev.sheetwright.inventory.Remnant;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+
+/** The terminal lines about a rack plan: what it holds, and what a commit recorded. */
+final class PlanReport {
+
+    private PlanReport() {
+    }
+
+    static void planned(PrintWriter w, RackPlan plan, Path out) {
+        String u = plan.unit().symbol();
+        w.printf(Locale.ROOT, "plan %s (%s): remnants cut %s, held until %s%n", plan.id(), plan.inventory(),
+                plan.remnantsUsed().isEmpty() ? "none" : String.join(", ", plan.remnantsUsed()), plan.reservedUntil());
+        for (RackPlan.PlannedOffcut o : plan.offcuts()) {
+            w.printf(Locale.ROOT, "  offcut %s  sheet %d  %.2f x %.2f %s (id marked on layer LABEL)%n", o.id(),
+                    o.sheet(), o.width(), o.height(), u);
+        }
+        w.printf(Locale.ROOT, "  offcuts smaller than %s are not recorded%n", plan.minOffcut().text(plan.unit()));
+        w.flush();
+    }
+
+    static void committed(PrintWriter w, RackPlan plan, List<Remnant> added) {
+        w.printf(Locale.ROOT, "committed plan %s: used %s; recorded %s%n", plan.id(),
+                plan.remnantsUsed().isEmpty() ? "no remnant" : String.join(", ", plan.remnantsUsed()),
+                added.isEmpty() ? "no offcut" : String.join(", ", added.stream().map(r -> r.id()
+                        + (r.location().isEmpty() ? "" : " at " + r.location())).toList()));
+        w.flush();
+    }
+}
