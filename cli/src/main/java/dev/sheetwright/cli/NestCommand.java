@@ -19,6 +19,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -50,6 +51,9 @@ public final class NestCommand implements Callable<Integer> {
     @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "search seed (default ${DEFAULT-VALUE})")
     long seed;
 
+    @Mixin
+    dev.sheetwright.cli.mixin.ShopOption shop;
+
     @Override
     public Integer call() {
         if (!(seconds >= 0) || seconds > 86400) {
@@ -67,6 +71,7 @@ public final class NestCommand implements Callable<Integer> {
         JobNest nest = JobNest.run(job, jobFile.toString(), options);
         progress.done();
         Map<String, Object> doc = NestJson.document(nest);
+        dev.sheetwright.core.quote.Quote quote;
         try (OutputFolder folder = OutputFolder.stage(out)) {
             for (SheetLayout s : nest.result().sheets()) {
                 Drawing d = SheetDrawings.drawing(s, nest.plan(), job.name(), job.unit());
@@ -75,9 +80,11 @@ public final class NestCommand implements Callable<Integer> {
             }
             PatternsJson.write(doc, folder.file("nest.json"));
             PatternsJson.write(PatternsJson.document(job, nest.developments()), folder.file("patterns.json"));
+            quote = QuoteFiles.write(folder, nest, jobFile, shop.settings());
             folder.commit();
         }
         print(nest, doc, (System.nanoTime() - start) / 1e9);
+        dev.sheetwright.cli.output.QuoteText.summary(quote).forEach(spec.commandLine().getOut()::println);
         return nest.result().unplaced().isEmpty() ? ExitCodes.OK : ExitCodes.UNPLACED;
     }
 
