@@ -5,8 +5,10 @@ import dev.sheetwright.cli.output.NestJson;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.PatternDrawings;
 import dev.sheetwright.cli.output.PatternsJson;
+import dev.sheetwright.cli.output.QuoteText;
 import dev.sheetwright.cli.output.SheetDrawings;
 import dev.sheetwright.core.job.Job;
+import dev.sheetwright.core.quote.Quote;
 import dev.sheetwright.dxf.Drawing;
 import dev.sheetwright.dxf.DxfWriter;
 import dev.sheetwright.nest.model.NestOptions;
@@ -90,6 +92,8 @@ public final class NestCommand implements Callable<Integer> {
     @Option(names = "--location", paramLabel = "TEXT", defaultValue = "",
             description = "with --commit: where the new offcuts are put on the rack")
     String location;
+    @Mixin
+    dev.sheetwright.cli.mixin.ShopOption shop;
 
     @Override
     public Integer call() {
@@ -119,8 +123,9 @@ public final class NestCommand implements Callable<Integer> {
             JobNest nest = JobNest.run(job, jobFile.toString(), options, fromRack);
             progress.done();
             RackPlan plan = rack == null ? null : rack.settle(nest, min);
+            Quote quote;
             try {
-                write(job, nest, plan);
+                quote = write(job, nest, plan);
             } catch (RuntimeException e) {
                 if (rack != null) {
                     rack.abandon();
@@ -128,6 +133,7 @@ public final class NestCommand implements Callable<Integer> {
                 throw e;
             }
             print(nest, NestJson.document(nest, plan), (System.nanoTime() - start) / 1e9);
+            QuoteText.summary(quote).forEach(spec.commandLine().getOut()::println);
             if (plan != null) {
                 PlanReport.planned(spec.commandLine().getOut(), plan, out);
                 if (commitNow) {
@@ -139,7 +145,7 @@ public final class NestCommand implements Callable<Integer> {
         }
     }
 
-    private void write(Job job, JobNest nest, RackPlan plan) {
+    private Quote write(Job job, JobNest nest, RackPlan plan) {
         Map<String, Object> doc = NestJson.document(nest, plan);
         try (OutputFolder folder = OutputFolder.stage(out)) {
             for (SheetLayout s : nest.result().sheets()) {
@@ -151,7 +157,9 @@ public final class NestCommand implements Callable<Integer> {
             }
             PatternsJson.write(doc, folder.file("nest.json"));
             PatternsJson.write(PatternsJson.document(job, nest.developments()), folder.file("patterns.json"));
+            Quote quote = QuoteFiles.write(folder, nest, jobFile, shop.settings());
             folder.commit();
+            return quote;
         }
     }
 

@@ -27,6 +27,10 @@ import dev.sheetwright.core.job.StockRemnant;
 import dev.sheetwright.core.job.StockSheet;
 import dev.sheetwright.core.material.Material;
 import dev.sheetwright.core.material.MaterialType;
+import dev.sheetwright.core.quote.MassUnit;
+import dev.sheetwright.core.quote.QuoteTerms;
+import dev.sheetwright.core.quote.Sourced;
+import dev.sheetwright.core.quote.WeightPrice;
 import dev.sheetwright.core.units.LengthUnit;
 import dev.sheetwright.core.units.Lengths;
 import java.io.IOException;
@@ -37,6 +41,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.Set;
 import org.snakeyaml.engine.v2.api.Load;
@@ -57,23 +62,39 @@ public final class JobReader {
     private final String file;
     private LengthUnit unit;
     private AllowanceTable table;
+    private QuoteTerms quoteTerms = QuoteTerms.NONE;
+
+    /** A job file read whole: the job and its {@code quote:} section. */
+    public record JobFile(Job job, QuoteTerms quote) {
+    }
 
     private JobReader(String file) {
         this.file = file;
     }
 
     public static Job read(Path path) {
+        return readFull(path).job();
+    }
+
+    /** Reads the job and its {@code quote:} section (or {@link QuoteTerms#NONE} when there is none). */
+    public static JobFile readFull(Path path) {
         String text;
         try {
             text = Files.readString(path, StandardCharsets.UTF_8);
         } catch (IOException e) {
             throw new JobFileException(path.toString(), null, null, "cannot read the job file: " + e.getMessage());
         }
-        return parse(text, path.toString());
+        return parseFull(text, path.toString());
     }
 
     public static Job parse(String text, String fileLabel) {
-        return new JobReader(fileLabel).job(text);
+        return parseFull(text, fileLabel).job();
+    }
+
+    public static JobFile parseFull(String text, String fileLabel) {
+        JobReader reader = new JobReader(fileLabel);
+        Job job = reader.job(text);
+        return new JobFile(job, reader.quoteTerms);
     }
 
     private Job job(String text) {
@@ -135,7 +156,41 @@ public final class JobReader {
         }
         CuttingRules cutting = cutting(top.has("cutting") ? top.map("cutting") : null);
         Stock stock = stock(top.has("stock") ? top.map("stock") : null);
+        if (top.has("quote")) {
+            quoteTerms = quote(top.map("quote"));
+        }
         return new Job(name, unit, material, face, fittings, cutting, stock, tolerance);
+    }
+
+    /** The {@code quote:} section: currency, one price per weight, machine rate per hour, lead-in length. */
+    private QuoteTerms quote(Fields q) {
+        q.allowOnly(Set.of("currency", "price-per-lb", "price-per-kg", "machine-rate", "lead-in"));
+        Optional<String> currency = Optional.empty();
+        if (q.has("currency")) {
+            String c = q.string("currency");
+            if (!c.matches("[A-Za-z]{1,5}")) {
+                throw q.error("currency", "must be a short code of letters such as USD, got '" + c + "'");
+            }
+            currency = Optional.of(c.toUpperCase(Locale.ROOT));
+        }
+        if (q.has("price-per-lb") && q.has("price-per-kg")) {
+            throw q.error("price-per-kg", "give price-per-lb or price-per-kg, not both");
+        }
+        Optional<WeightPrice> price = Optional.empty();
+        if (q.has("price-per-lb")) {
+            price = Optional.of(new WeightPrice(q.notNegative("price-per-lb", 0), MassUnit.LB, Sourced.JOB));
+        } else if (q.has("price-per-kg")) {
+            price = Optional.of(new WeightPrice(q.notNegative("price-per-kg", 0), MassUnit.KG, Sourced.JOB));
+        }
+        OptionalDouble rate = q.has("machine-rate") ? OptionalDouble.of(q.notNegative("machine-rate", 0))
+                : OptionalDouble.empty();
+        double leadIn = q.notNegative("lead-in", 0);
+        // a sanity bound only: lead-ins are about 1-6 mm (common practice, trade-reference §9.4)
+        if (leadIn > unit.fromMm(25)) {
+            throw q.error("lead-in", "must be at most " + unit.fromMm(25) + " " + unit.symbol() + " (25 mm), got "
+                    + leadIn);
+        }
+        return new QuoteTerms(currency, price, rate, leadIn);
     }
 
     private Material material(Fields m) {

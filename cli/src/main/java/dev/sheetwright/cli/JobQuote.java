@@ -1,0 +1,60 @@
+package dev.sheetwright.cli;
+
+import dev.sheetwright.core.cutting.CutChart;
+import dev.sheetwright.core.develop.Development;
+import dev.sheetwright.core.geom.Pattern;
+import dev.sheetwright.core.job.Job;
+import dev.sheetwright.core.quote.Quote;
+import dev.sheetwright.core.quote.QuoteRequest;
+import dev.sheetwright.core.quote.QuoteTerms;
+import dev.sheetwright.core.quote.ShopSettings;
+import dev.sheetwright.core.quote.StockUse;
+import dev.sheetwright.nest.jobs.JobNestRequest;
+import dev.sheetwright.nest.jobs.PatternShapes;
+import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.Placement;
+import dev.sheetwright.nest.model.Remnant;
+import dev.sheetwright.nest.model.Sheet;
+import dev.sheetwright.nest.model.SheetLayout;
+import java.util.ArrayList;
+import java.util.List;
+
+/** Hands a finished nest to the quote arithmetic in {@code core.quote}: one {@link StockUse} per sheet layout. */
+public final class JobQuote {
+
+    private JobQuote() {
+    }
+
+    public static Quote of(JobNest nest, QuoteTerms terms, ShopSettings shop) {
+        Job job = nest.job();
+        List<StockUse> stock = new ArrayList<>();
+        for (SheetLayout s : nest.result().sheets()) {
+            stock.add(stockUse(s, placedParts(s, nest.plan())));
+        }
+        List<String> devWarnings = new ArrayList<>();
+        for (Development d : nest.developments()) {
+            devWarnings.addAll(d.warnings());
+        }
+        return Quote.of(new QuoteRequest(job.unit(), job.material(), job.cutting().process(), CutChart.defaults(),
+                terms, shop, stock, job.fittings(), devWarnings));
+    }
+
+    /** The exact patterns of a layout, moved where they were placed (sheet coordinates). */
+    public static List<Pattern> placedParts(SheetLayout s, JobNestRequest plan) {
+        List<Pattern> out = new ArrayList<>();
+        for (Placement pl : s.parts()) {
+            out.add(plan.pattern(pl.fitting(), pl.piece()).transformed(PatternShapes.transform(pl)));
+        }
+        return out;
+    }
+
+    private static StockUse stockUse(SheetLayout s, List<Pattern> parts) {
+        if (s.stock() instanceof Sheet sh) {
+            return StockUse.sheet(sh.name(), sh.width(), sh.height(), sh.cost(), parts);
+        } else if (s.stock() instanceof Remnant r) {
+            return StockUse.remnant(r.id(), r.outline().getArea(), r.cost(), parts);
+        }
+        Coil c = (Coil) s.stock();
+        return StockUse.coil(c.name(), c.width(), s.usedLength(), c.costPerLength(), parts);
+    }
+}

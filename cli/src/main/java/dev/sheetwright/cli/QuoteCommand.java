@@ -1,0 +1,83 @@
+package dev.sheetwright.cli;
+
+import dev.sheetwright.cli.job.JobReader;
+import dev.sheetwright.cli.mixin.ShopOption;
+import dev.sheetwright.cli.output.OutputFolder;
+import dev.sheetwright.cli.output.QuoteText;
+import dev.sheetwright.core.job.Job;
+import dev.sheetwright.core.quote.Quote;
+import dev.sheetwright.core.quote.ShopSettings;
+import dev.sheetwright.nest.model.NestOptions;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.OptionalLong;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code sheetwright quote JOB.yaml}: a quick nest, then the material and cutting quote as a table. */
+@Command(name = "quote", mixinStandardHelpOptions = true,
+        description = "Nest a job quickly and print its material and cutting quote: stock, weights, cut length,"
+                + " pierces, cut time and cost, each rate with its source. With -o, also write quote.json,"
+                + " quote.csv, report.html and report.pdf.")
+public final class QuoteCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "JOB.yaml", description = "the job file")
+    Path jobFile;
+
+    @Option(names = {"-o", "--out"}, paramLabel = "OUT", description = "also write the quote files and report here")
+    Path out;
+
+    @Option(names = "--time", defaultValue = "2", paramLabel = "S",
+            description = "seconds the nest search may run (default ${DEFAULT-VALUE})")
+    double seconds;
+
+    @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "search seed (default ${DEFAULT-VALUE})")
+    long seed;
+
+    @Mixin
+    ShopOption shop;
+
+    @Override
+    public Integer call() {
+        if (!(seconds >= 0) || seconds > 86400) {
+            throw new ParameterException(spec.commandLine(), "--time must be from 0 to 86400 seconds, got " + seconds);
+        }
+        Job job = JobReader.read(jobFile);
+        ShopSettings settings = shop.settings();
+        PrintWriter err = spec.commandLine().getErr();
+        Progress progress = Progress.forTerminal(err, seconds);
+        NestOptions options = new NestOptions(Duration.ofMillis((long) (seconds * 1000)), OptionalLong.empty(), seed, 2,
+                progress);
+        JobNest nest = JobNest.run(job, jobFile.toString(), options);
+        progress.done();
+        Quote q;
+        if (out != null) {
+            try (OutputFolder folder = OutputFolder.stage(out)) {
+                q = QuoteFiles.write(folder, nest, jobFile, settings);
+                folder.commit();
+            }
+        } else {
+            q = QuoteFiles.quote(nest, jobFile, settings);
+        }
+        PrintWriter w = spec.commandLine().getOut();
+        QuoteText.table(job.name(), q).forEach(w::println);
+        nest.result().unplaced().forEach(up -> w.println("  NOT PLACED " + up.fitting() + " " + up.piece() + " #"
+                + up.copy() + ": " + up.reason() + " (the quote leaves it out)"));
+        if (out != null) {
+            w.println("Wrote " + out + " (quote.json, quote.csv, report.html, report.pdf)");
+        }
+        w.println(Cautions.SHORT);
+        w.flush();
+        return nest.result().unplaced().isEmpty() ? ExitCodes.OK : ExitCodes.UNPLACED;
+    }
+}
