@@ -72,9 +72,12 @@ public final class SectorBlank {
             // towards each other and must not meet inside the blank's radial range.
             double det = nr.x() * nl.y() - nr.y() * nl.x();
             Point2 meet = new Point2((wr * nl.y() - wl * nr.y()) / det, (nr.x() * wl - nl.x() * wr) / det);
-            double reach = Math.max(meet.dot(ur), meet.dot(ul));
-            double innerEnd = notch ? innerRadius : rb;
-            if (reach > innerEnd - tol.linear()) {
+            // Notched, the strips are rectangles that start square at the small-end corners: they clash when
+            // the offset lines meet beyond those corners. Not notched, the strips run on to the small-end
+            // allowance circle: they clash when the offset lines meet outside that circle.
+            boolean clash = notch ? Math.max(meet.dot(ur), meet.dot(ul)) > innerRadius - tol.linear()
+                    : meet.length() > rb - tol.linear();
+            if (clash) {
                 throw new FittingException(fitting, "pieces", String.format(java.util.Locale.ROOT,
                         "the pattern angle (%.1f deg) leaves too little room: the two seam allowances would overlap"
                                 + " near the small end; split the pattern with pieces: 2 or more",
