@@ -2,10 +2,10 @@ package dev.sheetwright.cli;
 
 import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.mixin.UnitsOption;
+import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.inventory.DxfOutline;
 import dev.sheetwright.inventory.NewRemnant;
 import dev.sheetwright.inventory.Remnant;
-import dev.sheetwright.inventory.RemnantMaterial;
 import dev.sheetwright.inventory.RemnantOutline;
 import dev.sheetwright.inventory.RemnantSource;
 import dev.sheetwright.inventory.RemnantStore;
@@ -68,7 +68,7 @@ public final class RemnantAddCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         return ExitCodes.run(spec, () -> {
-            RemnantMaterial m = RemnantMaterial.parse(material);
+            MaterialType m = MaterialType.parse(material);
             Double thicknessMm = thickness == null ? null
                     : SizeText.parseLength("--thickness", thickness, units.unit());
             RemnantOutline outline = outline();
@@ -78,7 +78,7 @@ public final class RemnantAddCommand implements Callable<Integer> {
                 Remnant added = store.add(remnant);
                 spec.commandLine().getOut().println("added " + added.id() + ": " + m.word() + " "
                         + SizeFormat.length(added.widthMm(), units.unit()) + " x "
-                        + SizeFormat.length(added.heightMm(), units.unit()) + " " + UnitsOption.word(units.unit())
+                        + SizeFormat.length(added.heightMm(), units.unit()) + " " + units.unit().symbol()
                         + (added.location().isEmpty() ? "" : " at " + added.location()));
             }
             return ExitCodes.OK;
@@ -94,14 +94,14 @@ public final class RemnantAddCommand implements Callable<Integer> {
             try {
                 return RemnantOutline.rectangle(wh[0], wh[1]);
             } catch (IllegalArgumentException e) {
-                throw new IllegalArgumentException("--size '" + shape.size + "' " + UnitsOption.word(units.unit())
+                throw new IllegalArgumentException("--size '" + shape.size + "' " + units.unit().symbol()
                         + ": " + e.getMessage(), e);
             }
         }
         try {
             return RemnantOutline.parse(shape.polygon, units.unit());
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("--polygon (" + UnitsOption.word(units.unit()) + "): "
+            throw new IllegalArgumentException("--polygon (" + units.unit().symbol() + "): "
                     + e.getMessage(), e);
         }
     }

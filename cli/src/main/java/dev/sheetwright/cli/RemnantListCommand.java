@@ -4,11 +4,12 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.mixin.UnitsOption;
-import dev.sheetwright.inventory.LengthUnit;
+import dev.sheetwright.core.material.MaterialType;
+import dev.sheetwright.core.material.UnitFactors;
+import dev.sheetwright.core.units.LengthUnit;
 import dev.sheetwright.inventory.OutlinePoint;
 import dev.sheetwright.inventory.Remnant;
 import dev.sheetwright.inventory.RemnantFilter;
-import dev.sheetwright.inventory.RemnantMaterial;
 import dev.sheetwright.inventory.RemnantSort;
 import dev.sheetwright.inventory.RemnantStore;
 import java.io.PrintWriter;
@@ -31,9 +32,6 @@ import picocli.CommandLine.TypeConversionException;
         exitCodeListHeading = "Exit codes:%n",
         exitCodeList = {ExitCodes.LIST_OK, ExitCodes.LIST_FAILURE, ExitCodes.LIST_BAD_INPUT})
 public final class RemnantListCommand implements Callable<Integer> {
-    private static final double MM2_PER_M2 = 1_000_000.0;
-    private static final double IN2_PER_FT2 = 144.0;
-
     @Spec
     CommandSpec spec;
 
@@ -77,7 +75,7 @@ public final class RemnantListCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         return ExitCodes.run(spec, () -> {
-            RemnantFilter filter = new RemnantFilter(material == null ? null : RemnantMaterial.parse(material),
+            RemnantFilter filter = new RemnantFilter(material == null ? null : MaterialType.parse(material),
                     gauge, null, null, all);
             List<Remnant> remnants;
             try (RemnantStore store = inventory.open()) {
@@ -123,8 +121,8 @@ public final class RemnantListCommand implements Callable<Integer> {
         if (remnants.isEmpty()) {
             return "no remnants match\n";
         }
-        String u = UnitsOption.word(unit);
-        String areaUnit = unit == LengthUnit.IN ? "ft2" : "m2";
+        String u = unit.symbol();
+        String areaUnit = unit == LengthUnit.INCH ? "ft2" : "m2";
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"ID", "MATERIAL", "GAUGE", "THICK " + u, "WIDTH " + u, "HEIGHT " + u,
                 "AREA " + areaUnit, "SHAPE", "STATE", "LOCATION", "ADDED", "SOURCE"});
@@ -134,7 +132,7 @@ public final class RemnantListCommand implements Callable<Integer> {
             total += area;
             rows.add(new String[] {r.id(), r.material().word(), r.gauge() == null ? "-" : r.gauge().toString(),
                     r.thicknessMm() == null ? "-" : SizeFormat.decimal(unit.fromMm(r.thicknessMm()),
-                            unit == LengthUnit.IN ? 4 : 2),
+                            unit == LengthUnit.INCH ? 4 : 2),
                     SizeFormat.length(r.widthMm(), unit), SizeFormat.length(r.heightMm(), unit),
                     SizeFormat.decimal(area, 2), r.outline().isRectangle() ? "rect" : "poly",
                     r.state().word(), r.location().isEmpty() ? "-" : r.location(),
@@ -162,6 +160,6 @@ public final class RemnantListCommand implements Callable<Integer> {
     }
 
     private static double area(double mm2, LengthUnit unit) {
-        return unit == LengthUnit.IN ? unit.areaFromMm2(mm2) / IN2_PER_FT2 : mm2 / MM2_PER_M2;
+        return unit == LengthUnit.INCH ? unit.areaFromMm2(mm2) / UnitFactors.IN2_PER_FT2 : mm2 / UnitFactors.MM2_PER_M2;
     }
 }

@@ -1,6 +1,6 @@
 package dev.sheetwright.cli;
 
-import dev.sheetwright.inventory.LengthUnit;
+import dev.sheetwright.core.units.LengthUnit;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 
@@ -35,7 +35,7 @@ final class SizeFormat {
 
     /** A length in mm shown in {@code unit}: {@code 1217.6} for mm, {@code 47.937 (47 15/16)} for inches. */
     static String length(double mm, LengthUnit unit) {
-        if (unit == LengthUnit.MM) {
+        if (unit == LengthUnit.MILLIMETRE) {
             return decimal(mm, 1);
         }
         double in = unit.fromMm(mm);

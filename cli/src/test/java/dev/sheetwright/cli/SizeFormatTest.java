@@ -3,7 +3,7 @@ package dev.sheetwright.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
-import dev.sheetwright.inventory.LengthUnit;
+import dev.sheetwright.core.units.LengthUnit;
 import org.junit.jupiter.api.Test;
 
 class SizeFormatTest {
@@ -21,33 +21,33 @@ class SizeFormatTest {
 
     @Test
     void length_inches_showsDecimalAndFraction() {
-        assertEquals("47.938 (47 15/16)", SizeFormat.length(1217.6125, LengthUnit.IN));
-        assertEquals("48", SizeFormat.length(1219.2, LengthUnit.IN));
-        assertEquals("1217.6", SizeFormat.length(1217.6125, LengthUnit.MM));
+        assertEquals("47.938 (47 15/16)", SizeFormat.length(1217.6125, LengthUnit.INCH));
+        assertEquals("48", SizeFormat.length(1219.2, LengthUnit.INCH));
+        assertEquals("1217.6", SizeFormat.length(1217.6125, LengthUnit.MILLIMETRE));
     }
 
     @Test
     void parseSize_unitsAndSeparators_giveMm() {
-        double[] wh = SizeText.parseSize("48 X 30", LengthUnit.IN);
+        double[] wh = SizeText.parseSize("48 X 30", LengthUnit.INCH);
         assertEquals(1219.2, wh[0], EPS);
         assertEquals(762, wh[1], EPS);
-        assertEquals(600, SizeText.parseSize("600x300", LengthUnit.MM)[0], EPS);
+        assertEquals(600, SizeText.parseSize("600x300", LengthUnit.MILLIMETRE)[0], EPS);
     }
 
     @Test
     void parseSize_malformed_namesOptionAndValue() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> SizeText.parseSize("48", LengthUnit.IN));
+                () -> SizeText.parseSize("48", LengthUnit.INCH));
         assertEquals("--size: '48' is not a size; write WIDTHxHEIGHT, e.g. 48x30", e.getMessage());
         IllegalArgumentException n = assertThrows(IllegalArgumentException.class,
-                () -> SizeText.parseSize("48xabc", LengthUnit.IN));
+                () -> SizeText.parseSize("48xabc", LengthUnit.INCH));
         assertEquals("--size: '48xabc': 'abc' is not a number", n.getMessage());
     }
 
     @Test
     void parseLength_ownUnitWinsOverDefault() {
-        assertEquals(0.8, SizeText.parseLength("--thickness", "0.8mm", LengthUnit.IN), EPS);
-        assertEquals(25.4, SizeText.parseLength("--thickness", "1in", LengthUnit.MM), EPS);
-        assertEquals(25.4, SizeText.parseLength("--thickness", "1", LengthUnit.IN), EPS);
+        assertEquals(0.8, SizeText.parseLength("--thickness", "0.8mm", LengthUnit.INCH), EPS);
+        assertEquals(25.4, SizeText.parseLength("--thickness", "1in", LengthUnit.MILLIMETRE), EPS);
+        assertEquals(25.4, SizeText.parseLength("--thickness", "1", LengthUnit.INCH), EPS);
     }
 }

@@ -1,5 +1,6 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.material.MaterialType;
 import java.io.IOException;
 import java.io.Writer;
 import java.nio.file.Files;
@@ -735,7 +736,7 @@ public final class RemnantStore implements AutoCloseable {
         Double t = rs.wasNull() ? null : thickness;
         long until = rs.getLong("reserved_until");
         Instant u = rs.wasNull() ? null : Instant.ofEpochMilli(until);
-        return new Remnant(RemnantId.format(seq), RemnantMaterial.parse(rs.getString("material")), g, t,
+        return new Remnant(RemnantId.format(seq), MaterialType.parse(rs.getString("material")), g, t,
                 RemnantOutline.parse(rs.getString("outline")), rs.getString("location"),
                 Instant.parse(rs.getString("added")), RemnantSource.parse(rs.getString("source")),
                 RemnantState.parse(rs.getString("state")), rs.getString("reserved_by"), u);
