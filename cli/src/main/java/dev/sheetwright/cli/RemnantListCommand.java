@@ -6,6 +6,7 @@ import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.mixin.UnitsOption;
 import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.material.UnitFactors;
+import dev.sheetwright.core.units.FractionFormat;
 import dev.sheetwright.core.units.LengthUnit;
 import dev.sheetwright.inventory.OutlinePoint;
 import dev.sheetwright.inventory.Remnant;
@@ -131,10 +132,10 @@ public final class RemnantListCommand implements Callable<Integer> {
             double area = area(r.areaMm2(), unit);
             total += area;
             rows.add(new String[] {r.id(), r.material().word(), r.gauge() == null ? "-" : r.gauge().toString(),
-                    r.thicknessMm() == null ? "-" : SizeFormat.decimal(unit.fromMm(r.thicknessMm()),
+                    r.thicknessMm() == null ? "-" : FractionFormat.decimal(unit.fromMm(r.thicknessMm()),
                             unit == LengthUnit.INCH ? 4 : 2),
                     SizeFormat.length(r.widthMm(), unit), SizeFormat.length(r.heightMm(), unit),
-                    SizeFormat.decimal(area, 2), r.outline().isRectangle() ? "rect" : "poly",
+                    FractionFormat.decimal(area, 2), r.outline().isRectangle() ? "rect" : "poly",
                     r.state().word(), r.location().isEmpty() ? "-" : r.location(),
                     r.added().toString().substring(0, 10), r.source().text()});
         }
@@ -154,7 +155,7 @@ public final class RemnantListCommand implements Callable<Integer> {
             }
             sb.append(line.toString().stripTrailing()).append('\n');
         }
-        sb.append(remnants.size()).append(" remnant(s), ").append(SizeFormat.decimal(total, 2)).append(' ')
+        sb.append(remnants.size()).append(" remnant(s), ").append(FractionFormat.decimal(total, 2)).append(' ')
                 .append(areaUnit).append('\n');
         return sb.toString();
     }

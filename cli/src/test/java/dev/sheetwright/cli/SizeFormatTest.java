@@ -10,16 +10,6 @@ class SizeFormatTest {
     private static final double EPS = 1e-9;
 
     @Test
-    void fraction_sixteenths_areReduced() {
-        assertEquals("47 15/16", SizeFormat.fraction(47.9375));
-        assertEquals("48", SizeFormat.fraction(48.0));
-        assertEquals("1/2", SizeFormat.fraction(0.5));
-        assertEquals("30 1/4", SizeFormat.fraction(30.26));
-        assertEquals("48", SizeFormat.fraction(47.99));
-        assertEquals("0", SizeFormat.fraction(0.01));
-    }
-
-    @Test
     void length_inches_showsDecimalAndFraction() {
         assertEquals("47.938 (47 15/16)", SizeFormat.length(1217.6125, LengthUnit.INCH));
         assertEquals("48", SizeFormat.length(1219.2, LengthUnit.INCH));
