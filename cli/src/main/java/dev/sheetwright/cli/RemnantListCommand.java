@@ -2,7 +2,6 @@ package dev.sheetwright.cli;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
-import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.mixin.UnitsOption;
 import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.material.UnitFactors;
@@ -12,33 +11,21 @@ import dev.sheetwright.inventory.OutlinePoint;
 import dev.sheetwright.inventory.Remnant;
 import dev.sheetwright.inventory.RemnantFilter;
 import dev.sheetwright.inventory.RemnantSort;
-import dev.sheetwright.inventory.RemnantStore;
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 import picocli.CommandLine.TypeConversionException;
 
 /** {@code remnant list}: shows the rack as an aligned table, or as JSON (always in mm). */
-@Command(name = "list", mixinStandardHelpOptions = true,
-        description = "Show the offcuts on the rack (not the used ones unless --all).",
-        exitCodeListHeading = "Exit codes:%n",
-        exitCodeList = {ExitCodes.LIST_OK, ExitCodes.LIST_FAILURE, ExitCodes.LIST_BAD_INPUT})
-public final class RemnantListCommand implements Callable<Integer> {
-    @Spec
-    CommandSpec spec;
-
-    @Mixin
-    InventoryOption inventory;
-
+@Command(name = "list", description = "Show the offcuts on the rack (not the used ones unless --all).")
+public final class RemnantListCommand extends RemnantSubcommand {
     @Mixin
     UnitsOption units;
 
@@ -74,23 +61,16 @@ public final class RemnantListCommand implements Callable<Integer> {
     }
 
     @Override
-    public Integer call() {
-        return ExitCodes.run(spec, () -> {
-            RemnantFilter filter = new RemnantFilter(material == null ? null : MaterialType.parse(material),
-                    gauge, null, null, all);
-            List<Remnant> remnants;
-            try (RemnantStore store = inventory.open()) {
-                remnants = store.list(filter, sort);
-            }
-            PrintWriter out = spec.commandLine().getOut();
-            if (json) {
-                out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
-                        .writeValueAsString(remnants.stream().map(RemnantListCommand::toJson).toList()));
-            } else {
-                out.print(table(remnants, units.unit()));
-            }
-            return ExitCodes.OK;
-        });
+    void run(PrintWriter out) throws IOException {
+        RemnantFilter filter = new RemnantFilter(material == null ? null : MaterialType.parse(material),
+                gauge, null, null, all);
+        List<Remnant> remnants = inventory.apply(store -> store.list(filter, sort));
+        if (json) {
+            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
+                    .writeValueAsString(remnants.stream().map(RemnantListCommand::toJson).toList()));
+        } else {
+            out.print(table(remnants, units.unit()));
+        }
     }
 
     private static Map<String, Object> toJson(Remnant r) {
