@@ -3,6 +3,7 @@ package dev.sheetwright.cli;
 import dev.sheetwright.core.geom.Point2;
 import dev.sheetwright.core.job.Job;
 import dev.sheetwright.core.job.StockRemnant;
+import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.units.LengthUnit;
 import dev.sheetwright.inventory.OutlinePoint;
 import dev.sheetwright.inventory.PlanHold;
@@ -118,9 +119,8 @@ final class RackPlanning implements AutoCloseable {
             offcuts.add(new RackPlan.PlannedOffcut(hold.offcutIds().get(i), s.index() + 1, o.x(), o.y(), o.width(),
                     o.height()));
         }
-        Integer gauge = job.material().gauge().isPresent() ? job.material().gauge().getAsInt() : null;
         return new RackPlan(planId, store.file().toAbsolutePath(), job.name(), job.unit(), job.material().type(),
-                gauge, job.material().thicknessMm(), hold.until(), List.copyOf(used), offcuts, min);
+                jobGauge(), job.material().thicknessMm(), hold.until(), List.copyOf(used), offcuts, min);
     }
 
     /** Hands back every remnant this plan holds (after a failure); the ids it took stay unused. */
@@ -151,14 +151,22 @@ final class RackPlanning implements AutoCloseable {
     }
 
     private static String describe(Remnant r) {
-        return r.material().word() + (r.gauge() != null ? " " + r.gauge() + " ga" : "")
-                + (r.thicknessMm() != null ? String.format(Locale.ROOT, " %.3f mm", r.thicknessMm()) : "");
+        return describe(r.material(), r.gauge(), r.thicknessMm());
     }
 
     private String jobMaterial() {
-        return job.material().type().word()
-                + (job.material().gauge().isPresent() ? " " + job.material().gauge().getAsInt() + " ga" : "")
-                + String.format(Locale.ROOT, " %.3f mm", job.material().thicknessMm());
+        return describe(job.material().type(), jobGauge(), job.material().thicknessMm());
+    }
+
+    /** The job's gauge, or null when its material is given by thickness. */
+    private Integer jobGauge() {
+        return job.material().gauge().isPresent() ? job.material().gauge().getAsInt() : null;
+    }
+
+    /** E.g. {@code galvanized 24 ga 0.701 mm}; gauge and thickness are left out when null. */
+    private static String describe(MaterialType type, Integer gauge, Double thicknessMm) {
+        return type.word() + (gauge != null ? " " + gauge + " ga" : "")
+                + (thicknessMm != null ? String.format(Locale.ROOT, " %.3f mm", thicknessMm) : "");
     }
 
     /** The remnant's corners converted from the store's millimetres to {@code unit}. */
