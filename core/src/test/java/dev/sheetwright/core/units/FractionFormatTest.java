@@ -29,13 +29,19 @@ class FractionFormatTest {
     }
 
     @Test
-    void format_sixteenths_areReduced() {
+    void format_nearestSixteenth_reduced() {
         FractionFormat f = FractionFormat.SIXTEENTHS;
+        assertEquals("18 7/8", f.format(18.8496));
+        assertEquals("3/8", f.format(0.375));
         assertEquals("47 15/16", f.format(47.9375));
-        assertEquals("48", f.format(48.0));
         assertEquals("1/2", f.format(0.5));
         assertEquals("30 1/4", f.format(30.26));
         assertEquals("48", f.format(47.99));
+        assertEquals("12", f.format(11.98));
         assertEquals("0", f.format(0.01));
+        assertEquals("-1 1/2", f.format(-1.5));
+        assertEquals("0", f.format(-0.01));
+        assertEquals("2 7/16", f.format(2.4115)); // Coey's drawn gore height [S:COEY] via trade-reference §3.5(a)
+        assertEquals("14 15/32", new FractionFormat(32).format(14.4693));
     }
 }
