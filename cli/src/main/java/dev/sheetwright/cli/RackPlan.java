@@ -2,8 +2,8 @@ package dev.sheetwright.cli;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.units.LengthUnit;
-import dev.sheetwright.inventory.RemnantMaterial;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -30,7 +30,7 @@ import java.util.Map;
  * @param offcuts       the new offcuts to record at commit, each with the id already etched on its sheet
  * @param minOffcut     the smallest offcut recorded
  */
-public record RackPlan(String id, Path inventory, String job, LengthUnit unit, RemnantMaterial material, Integer gauge,
+public record RackPlan(String id, Path inventory, String job, LengthUnit unit, MaterialType material, Integer gauge,
         double thicknessMm, Instant reservedUntil, List<String> remnantsUsed, List<PlannedOffcut> offcuts,
         MinOffcut minOffcut) {
 
@@ -120,7 +120,7 @@ public record RackPlan(String id, Path inventory, String job, LengthUnit unit, R
             }
             JsonNode min = p.path("minOffcut");
             return new RackPlan(text(p, "id"), Path.of(text(p, "inventory")), text(p, "job"), unit,
-                    RemnantMaterial.parse(text(mat, "type")), mat.has("gauge") ? (int) number(mat, "gauge") : null,
+                    MaterialType.parse(text(mat, "type")), mat.has("gauge") ? (int) number(mat, "gauge") : null,
                     number(mat, "thicknessMm"), Instant.parse(text(p, "reservedUntil")), used, offcuts,
                     new MinOffcut(number(min, "width"), number(min, "area")));
         } catch (IllegalArgumentException | DateTimeParseException e) {

@@ -3,12 +3,12 @@ package dev.sheetwright.cli;
 import dev.sheetwright.core.geom.Point2;
 import dev.sheetwright.core.job.Job;
 import dev.sheetwright.core.job.StockRemnant;
+import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.units.LengthUnit;
 import dev.sheetwright.inventory.OutlinePoint;
 import dev.sheetwright.inventory.PlanHold;
 import dev.sheetwright.inventory.Remnant;
 import dev.sheetwright.inventory.RemnantFilter;
-import dev.sheetwright.inventory.RemnantMaterial;
 import dev.sheetwright.inventory.RemnantStore;
 import dev.sheetwright.nest.model.Offcut;
 import dev.sheetwright.nest.model.SheetLayout;
@@ -46,7 +46,6 @@ final class RackPlanning implements AutoCloseable {
 
     /** Opens the inventory {@code file}, which must exist, for a new plan of {@code job}. */
     static RackPlanning open(Path file, Job job, Duration ttl) {
-        RemnantMaterial.parse(job.material().type().word()); // every job material is a rack material
         return new RackPlanning(dev.sheetwright.cli.mixin.InventoryOption.openExisting(file), job, ttl);
     }
 
@@ -67,7 +66,6 @@ final class RackPlanning implements AutoCloseable {
      * @throws dev.sheetwright.inventory.RemnantConflictException if a named remnant is used or held by another plan
      */
     List<StockRemnant> reserve(boolean all, List<String> ids) {
-        RemnantMaterial material = RemnantMaterial.parse(job.material().type().word());
         for (String id : ids) {
             Remnant r = store.get(id).orElseThrow(() -> new IllegalArgumentException("--remnant " + id
                     + ": no such remnant in " + store.file()));
@@ -80,7 +78,7 @@ final class RackPlanning implements AutoCloseable {
             store.reserveIds(ids, planId, ttl);
         }
         if (all) {
-            RemnantFilter byMaterial = RemnantFilter.any().withMaterial(material);
+            RemnantFilter byMaterial = RemnantFilter.any().withMaterial(job.material().type());
             if (job.material().gauge().isPresent()) {
                 store.reserve(byMaterial.withGauge(job.material().gauge().getAsInt()), planId, ttl);
             }
@@ -121,10 +119,8 @@ final class RackPlanning implements AutoCloseable {
             offcuts.add(new RackPlan.PlannedOffcut(hold.offcutIds().get(i), s.index() + 1, o.x(), o.y(), o.width(),
                     o.height()));
         }
-        RemnantMaterial material = RemnantMaterial.parse(job.material().type().word());
-        Integer gauge = job.material().gauge().isPresent() ? job.material().gauge().getAsInt() : null;
-        return new RackPlan(planId, store.file().toAbsolutePath(), job.name(), job.unit(), material, gauge,
-                job.material().thicknessMm(), hold.until(), List.copyOf(used), offcuts, min);
+        return new RackPlan(planId, store.file().toAbsolutePath(), job.name(), job.unit(), job.material().type(),
+                jobGauge(), job.material().thicknessMm(), hold.until(), List.copyOf(used), offcuts, min);
     }
 
     /** Hands back every remnant this plan holds (after a failure); the ids it took stay unused. */
@@ -144,7 +140,7 @@ final class RackPlanning implements AutoCloseable {
     }
 
     private boolean matchesJob(Remnant r) {
-        if (!r.material().word().equals(job.material().type().word())) {
+        if (r.material() != job.material().type()) {
             return false;
         }
         if (r.gauge() != null && job.material().gauge().isPresent()) {
@@ -155,14 +151,22 @@ final class RackPlanning implements AutoCloseable {
     }
 
     private static String describe(Remnant r) {
-        return r.material().word() + (r.gauge() != null ? " " + r.gauge() + " ga" : "")
-                + (r.thicknessMm() != null ? String.format(Locale.ROOT, " %.3f mm", r.thicknessMm()) : "");
+        return describe(r.material(), r.gauge(), r.thicknessMm());
     }
 
     private String jobMaterial() {
-        return job.material().type().word()
-                + (job.material().gauge().isPresent() ? " " + job.material().gauge().getAsInt() + " ga" : "")
-                + String.format(Locale.ROOT, " %.3f mm", job.material().thicknessMm());
+        return describe(job.material().type(), jobGauge(), job.material().thicknessMm());
+    }
+
+    /** The job's gauge, or null when its material is given by thickness. */
+    private Integer jobGauge() {
+        return job.material().gauge().isPresent() ? job.material().gauge().getAsInt() : null;
+    }
+
+    /** E.g. {@code galvanized 24 ga 0.701 mm}; gauge and thickness are left out when null. */
+    private static String describe(MaterialType type, Integer gauge, Double thicknessMm) {
+        return type.word() + (gauge != null ? " " + gauge + " ga" : "")
+                + (thicknessMm != null ? String.format(Locale.ROOT, " %.3f mm", thicknessMm) : "");
     }
 
     /** The remnant's corners converted from the store's millimetres to {@code unit}. */

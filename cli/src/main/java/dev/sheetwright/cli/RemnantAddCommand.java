@@ -1,35 +1,22 @@
 package dev.sheetwright.cli;
 
-import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.mixin.UnitsOption;
+import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.inventory.DxfOutline;
 import dev.sheetwright.inventory.NewRemnant;
 import dev.sheetwright.inventory.Remnant;
-import dev.sheetwright.inventory.RemnantMaterial;
 import dev.sheetwright.inventory.RemnantOutline;
 import dev.sheetwright.inventory.RemnantSource;
-import dev.sheetwright.inventory.RemnantStore;
+import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** {@code remnant add}: records one offcut and prints its new id for the label. */
-@Command(name = "add", mixinStandardHelpOptions = true,
-        description = "Record an offcut on the rack; prints its id (e.g. R-0042) for the label.",
-        exitCodeListHeading = "Exit codes:%n",
-        exitCodeList = {ExitCodes.LIST_OK, ExitCodes.LIST_FAILURE, ExitCodes.LIST_BAD_INPUT})
-public final class RemnantAddCommand implements Callable<Integer> {
-    @Spec
-    CommandSpec spec;
-
-    @Mixin
-    InventoryOption inventory;
-
+@Command(name = "add", description = "Record an offcut on the rack; prints its id (e.g. R-0042) for the label.")
+public final class RemnantAddCommand extends RemnantSubcommand {
     @Mixin
     UnitsOption units;
 
@@ -66,23 +53,17 @@ public final class RemnantAddCommand implements Callable<Integer> {
     String location;
 
     @Override
-    public Integer call() {
-        return ExitCodes.run(spec, () -> {
-            RemnantMaterial m = RemnantMaterial.parse(material);
-            Double thicknessMm = thickness == null ? null
-                    : SizeText.parseLength("--thickness", thickness, units.unit());
-            RemnantOutline outline = outline();
-            NewRemnant remnant = new NewRemnant(m, gauge, thicknessMm, outline, location,
-                    RemnantSource.manual());
-            try (RemnantStore store = inventory.open()) {
-                Remnant added = store.add(remnant);
-                spec.commandLine().getOut().println("added " + added.id() + ": " + m.word() + " "
-                        + SizeFormat.length(added.widthMm(), units.unit()) + " x "
-                        + SizeFormat.length(added.heightMm(), units.unit()) + " " + UnitsOption.word(units.unit())
-                        + (added.location().isEmpty() ? "" : " at " + added.location()));
-            }
-            return ExitCodes.OK;
-        });
+    void run(PrintWriter out) {
+        MaterialType m = MaterialType.parse(material);
+        Double thicknessMm = thickness == null ? null
+                : SizeText.parseLength("--thickness", thickness, units.unit());
+        RemnantOutline outline = outline();
+        NewRemnant remnant = new NewRemnant(m, gauge, thicknessMm, outline, location, RemnantSource.manual());
+        Remnant added = inventory.apply(store -> store.add(remnant));
+        out.println("added " + added.id() + ": " + m.word() + " "
+                + SizeFormat.length(added.widthMm(), units.unit()) + " x "
+                + SizeFormat.length(added.heightMm(), units.unit()) + " " + units.unit().symbol()
+                + (added.location().isEmpty() ? "" : " at " + added.location()));
     }
 
     private RemnantOutline outline() {
@@ -94,14 +75,14 @@ public final class RemnantAddCommand implements Callable<Integer> {
             try {
                 return RemnantOutline.rectangle(wh[0], wh[1]);
             } catch (IllegalArgumentException e) {
-                throw new IllegalArgumentException("--size '" + shape.size + "' " + UnitsOption.word(units.unit())
+                throw new IllegalArgumentException("--size '" + shape.size + "' " + units.unit().symbol()
                         + ": " + e.getMessage(), e);
             }
         }
         try {
             return RemnantOutline.parse(shape.polygon, units.unit());
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("--polygon (" + UnitsOption.word(units.unit()) + "): "
+            throw new IllegalArgumentException("--polygon (" + units.unit().symbol() + "): "
                     + e.getMessage(), e);
         }
     }

@@ -2,44 +2,30 @@ package dev.sheetwright.cli;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
-import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.mixin.UnitsOption;
-import dev.sheetwright.inventory.LengthUnit;
+import dev.sheetwright.core.material.MaterialType;
+import dev.sheetwright.core.material.UnitFactors;
+import dev.sheetwright.core.units.FractionFormat;
+import dev.sheetwright.core.units.LengthUnit;
 import dev.sheetwright.inventory.OutlinePoint;
 import dev.sheetwright.inventory.Remnant;
 import dev.sheetwright.inventory.RemnantFilter;
-import dev.sheetwright.inventory.RemnantMaterial;
 import dev.sheetwright.inventory.RemnantSort;
-import dev.sheetwright.inventory.RemnantStore;
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 import picocli.CommandLine.TypeConversionException;
 
 /** {@code remnant list}: shows the rack as an aligned table, or as JSON (always in mm). */
-@Command(name = "list", mixinStandardHelpOptions = true,
-        description = "Show the offcuts on the rack (not the used ones unless --all).",
-        exitCodeListHeading = "Exit codes:%n",
-        exitCodeList = {ExitCodes.LIST_OK, ExitCodes.LIST_FAILURE, ExitCodes.LIST_BAD_INPUT})
-public final class RemnantListCommand implements Callable<Integer> {
-    private static final double MM2_PER_M2 = 1_000_000.0;
-    private static final double IN2_PER_FT2 = 144.0;
-
-    @Spec
-    CommandSpec spec;
-
-    @Mixin
-    InventoryOption inventory;
-
+@Command(name = "list", description = "Show the offcuts on the rack (not the used ones unless --all).")
+public final class RemnantListCommand extends RemnantSubcommand {
     @Mixin
     UnitsOption units;
 
@@ -75,23 +61,16 @@ public final class RemnantListCommand implements Callable<Integer> {
     }
 
     @Override
-    public Integer call() {
-        return ExitCodes.run(spec, () -> {
-            RemnantFilter filter = new RemnantFilter(material == null ? null : RemnantMaterial.parse(material),
-                    gauge, null, null, all);
-            List<Remnant> remnants;
-            try (RemnantStore store = inventory.open()) {
-                remnants = store.list(filter, sort);
-            }
-            PrintWriter out = spec.commandLine().getOut();
-            if (json) {
-                out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
-                        .writeValueAsString(remnants.stream().map(RemnantListCommand::toJson).toList()));
-            } else {
-                out.print(table(remnants, units.unit()));
-            }
-            return ExitCodes.OK;
-        });
+    void run(PrintWriter out) throws IOException {
+        RemnantFilter filter = new RemnantFilter(material == null ? null : MaterialType.parse(material),
+                gauge, null, null, all);
+        List<Remnant> remnants = inventory.apply(store -> store.list(filter, sort));
+        if (json) {
+            out.println(new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
+                    .writeValueAsString(remnants.stream().map(RemnantListCommand::toJson).toList()));
+        } else {
+            out.print(table(remnants, units.unit()));
+        }
     }
 
     private static Map<String, Object> toJson(Remnant r) {
@@ -123,8 +102,8 @@ public final class RemnantListCommand implements Callable<Integer> {
         if (remnants.isEmpty()) {
             return "no remnants match\n";
         }
-        String u = UnitsOption.word(unit);
-        String areaUnit = unit == LengthUnit.IN ? "ft2" : "m2";
+        String u = unit.symbol();
+        String areaUnit = unit == LengthUnit.INCH ? "ft2" : "m2";
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"ID", "MATERIAL", "GAUGE", "THICK " + u, "WIDTH " + u, "HEIGHT " + u,
                 "AREA " + areaUnit, "SHAPE", "STATE", "LOCATION", "ADDED", "SOURCE"});
@@ -133,10 +112,10 @@ public final class RemnantListCommand implements Callable<Integer> {
             double area = area(r.areaMm2(), unit);
             total += area;
             rows.add(new String[] {r.id(), r.material().word(), r.gauge() == null ? "-" : r.gauge().toString(),
-                    r.thicknessMm() == null ? "-" : SizeFormat.decimal(unit.fromMm(r.thicknessMm()),
-                            unit == LengthUnit.IN ? 4 : 2),
+                    r.thicknessMm() == null ? "-" : FractionFormat.decimal(unit.fromMm(r.thicknessMm()),
+                            unit == LengthUnit.INCH ? 4 : 2),
                     SizeFormat.length(r.widthMm(), unit), SizeFormat.length(r.heightMm(), unit),
-                    SizeFormat.decimal(area, 2), r.outline().isRectangle() ? "rect" : "poly",
+                    FractionFormat.decimal(area, 2), r.outline().isRectangle() ? "rect" : "poly",
                     r.state().word(), r.location().isEmpty() ? "-" : r.location(),
                     r.added().toString().substring(0, 10), r.source().text()});
         }
@@ -156,12 +135,12 @@ public final class RemnantListCommand implements Callable<Integer> {
             }
             sb.append(line.toString().stripTrailing()).append('\n');
         }
-        sb.append(remnants.size()).append(" remnant(s), ").append(SizeFormat.decimal(total, 2)).append(' ')
+        sb.append(remnants.size()).append(" remnant(s), ").append(FractionFormat.decimal(total, 2)).append(' ')
                 .append(areaUnit).append('\n');
         return sb.toString();
     }
 
     private static double area(double mm2, LengthUnit unit) {
-        return unit == LengthUnit.IN ? unit.areaFromMm2(mm2) / IN2_PER_FT2 : mm2 / MM2_PER_M2;
+        return unit == LengthUnit.INCH ? unit.areaFromMm2(mm2) / UnitFactors.IN2_PER_FT2 : mm2 / UnitFactors.MM2_PER_M2;
     }
 }

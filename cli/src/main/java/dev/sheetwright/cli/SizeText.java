@@ -1,6 +1,6 @@
 package dev.sheetwright.cli;
 
-import dev.sheetwright.inventory.LengthUnit;
+import dev.sheetwright.core.units.LengthUnit;
 import java.util.Locale;
 
 /** Reads sizes typed on the command line (the engine only takes millimetres). Package-private. */
@@ -24,7 +24,7 @@ final class SizeText {
             return number(option, text, t.substring(0, t.length() - 2));
         }
         if (t.endsWith("in")) {
-            return LengthUnit.IN.toMm(number(option, text, t.substring(0, t.length() - 2)));
+            return LengthUnit.INCH.toMm(number(option, text, t.substring(0, t.length() - 2)));
         }
         return unit.toMm(number(option, text, t));
     }

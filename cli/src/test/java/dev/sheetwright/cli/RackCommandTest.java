@@ -7,9 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.inventory.NewRemnant;
 import dev.sheetwright.inventory.Remnant;
-import dev.sheetwright.inventory.RemnantMaterial;
 import dev.sheetwright.inventory.RemnantOutline;
 import dev.sheetwright.inventory.RemnantState;
 import dev.sheetwright.inventory.RemnantStore;
@@ -59,9 +59,9 @@ class RackCommandTest {
         db = dir.resolve("rack.db");
         job = Files.writeString(dir.resolve("job.yaml"), JOB);
         try (RemnantStore store = RemnantStore.open(db)) {
-            store.add(NewRemnant.manual(RemnantMaterial.GALVANIZED, 24,
+            store.add(NewRemnant.manual(MaterialType.GALVANIZED, 24,
                     RemnantOutline.rectangle(40 * 25.4, 30 * 25.4), "rack A1"));                // R-0001
-            store.add(NewRemnant.manual(RemnantMaterial.STAINLESS, 24,
+            store.add(NewRemnant.manual(MaterialType.STAINLESS, 24,
                     RemnantOutline.rectangle(40 * 25.4, 30 * 25.4), "rack A2"));                // R-0002
         }
     }

@@ -111,8 +111,8 @@ class RemnantCommandTest {
         Run r = run("add", "--size", "48x30", "--material", "copper", "--gauge", "24");
 
         assertEquals(2, r.exit());
-        assertEquals("error: material: unknown material 'copper'; expected one of galvanized | steel | stainless | aluminum\n",
-                r.err());
+        assertEquals("error: material 'copper' is not known; valid words: galvanized, steel, stainless, aluminum"
+                + " (or aluminium)\n", r.err());
         assertEquals(0, count());
     }
 

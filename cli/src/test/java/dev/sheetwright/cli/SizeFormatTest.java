@@ -3,51 +3,41 @@ package dev.sheetwright.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
-import dev.sheetwright.inventory.LengthUnit;
+import dev.sheetwright.core.units.LengthUnit;
 import org.junit.jupiter.api.Test;
 
 class SizeFormatTest {
     private static final double EPS = 1e-9;
 
     @Test
-    void fraction_sixteenths_areReduced() {
-        assertEquals("47 15/16", SizeFormat.fraction(47.9375));
-        assertEquals("48", SizeFormat.fraction(48.0));
-        assertEquals("1/2", SizeFormat.fraction(0.5));
-        assertEquals("30 1/4", SizeFormat.fraction(30.26));
-        assertEquals("48", SizeFormat.fraction(47.99));
-        assertEquals("0", SizeFormat.fraction(0.01));
-    }
-
-    @Test
     void length_inches_showsDecimalAndFraction() {
-        assertEquals("47.938 (47 15/16)", SizeFormat.length(1217.6125, LengthUnit.IN));
-        assertEquals("48", SizeFormat.length(1219.2, LengthUnit.IN));
-        assertEquals("1217.6", SizeFormat.length(1217.6125, LengthUnit.MM));
+        assertEquals("47.938 (47 15/16)", SizeFormat.length(1217.6125, LengthUnit.INCH));
+        assertEquals("48", SizeFormat.length(1219.2, LengthUnit.INCH));
+        assertEquals("1217.6", SizeFormat.length(1217.6125, LengthUnit.MILLIMETRE));
     }
 
     @Test
     void parseSize_unitsAndSeparators_giveMm() {
-        double[] wh = SizeText.parseSize("48 X 30", LengthUnit.IN);
+        double[] wh = SizeText.parseSize("48 X 30", LengthUnit.INCH);
         assertEquals(1219.2, wh[0], EPS);
         assertEquals(762, wh[1], EPS);
-        assertEquals(600, SizeText.parseSize("600x300", LengthUnit.MM)[0], EPS);
+        assertEquals(600, SizeText.parseSize("600x300", LengthUnit.MILLIMETRE)[0], EPS);
     }
 
     @Test
     void parseSize_malformed_namesOptionAndValue() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> SizeText.parseSize("48", LengthUnit.IN));
+                () -> SizeText.parseSize("48", LengthUnit.INCH));
         assertEquals("--size: '48' is not a size; write WIDTHxHEIGHT, e.g. 48x30", e.getMessage());
         IllegalArgumentException n = assertThrows(IllegalArgumentException.class,
-                () -> SizeText.parseSize("48xabc", LengthUnit.IN));
+                () -> SizeText.parseSize("48xabc", LengthUnit.INCH));
         assertEquals("--size: '48xabc': 'abc' is not a number", n.getMessage());
     }
 
     @Test
     void parseLength_ownUnitWinsOverDefault() {
-        assertEquals(0.8, SizeText.parseLength("--thickness", "0.8mm", LengthUnit.IN), EPS);
-        assertEquals(25.4, SizeText.parseLength("--thickness", "1in", LengthUnit.MM), EPS);
-        assertEquals(25.4, SizeText.parseLength("--thickness", "1", LengthUnit.IN), EPS);
+        assertEquals(0.8, SizeText.parseLength("--thickness", "0.8mm", LengthUnit.INCH), EPS);
+        assertEquals(25.4, SizeText.parseLength("--thickness", "1in", LengthUnit.MILLIMETRE), EPS);
+        assertEquals(25.4, SizeText.parseLength("--thickness", "1", LengthUnit.INCH), EPS);
     }
 }

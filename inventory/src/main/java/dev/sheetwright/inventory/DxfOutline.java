@@ -1,5 +1,6 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.units.LengthUnit;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
@@ -285,7 +286,7 @@ public final class DxfOutline {
     private static double unitScale(Path dxf, String code) {
         return switch (code.strip()) {
             case "0", "4" -> 1.0;
-            case "1" -> LengthUnit.MM_PER_INCH;
+            case "1" -> LengthUnit.INCH.mmPerUnit();
             case "5" -> 10.0;
             case "6" -> 1000.0;
             default -> throw new IllegalArgumentException("dxf: " + dxf + " $INSUNITS " + code

@@ -1,5 +1,7 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.material.MaterialType;
+
 /**
  * A remnant about to be added to the store (it has no id yet).
  *
@@ -13,7 +15,7 @@ package dev.sheetwright.inventory;
  *                    characters; null is stored as empty
  * @param source      where it came from
  */
-public record NewRemnant(RemnantMaterial material, Integer gauge, Double thicknessMm, RemnantOutline outline,
+public record NewRemnant(MaterialType material, Integer gauge, Double thicknessMm, RemnantOutline outline,
                          String location, RemnantSource source) {
     public static final int MIN_GAUGE = 1;
     public static final int MAX_GAUGE = 38;
@@ -22,7 +24,7 @@ public record NewRemnant(RemnantMaterial material, Integer gauge, Double thickne
 
     public NewRemnant {
         if (material == null) {
-            throw new IllegalArgumentException("material: is missing; expected one of " + RemnantMaterial.words());
+            throw new IllegalArgumentException("material: is missing; valid words: " + MaterialType.validWords());
         }
         if (gauge == null && thicknessMm == null) {
             throw new IllegalArgumentException("gauge/thickness_mm: both are missing; give a gauge or a thickness");
@@ -50,18 +52,18 @@ public record NewRemnant(RemnantMaterial material, Integer gauge, Double thickne
     }
 
     /** A hand-entered remnant with a gauge and no thickness. */
-    public static NewRemnant manual(RemnantMaterial material, int gauge, RemnantOutline outline, String location) {
+    public static NewRemnant manual(MaterialType material, int gauge, RemnantOutline outline, String location) {
         return new NewRemnant(material, gauge, null, outline, location, RemnantSource.manual());
     }
 
     /** A hand-entered remnant with a thickness in mm and no gauge. */
-    public static NewRemnant manualMm(RemnantMaterial material, double thicknessMm, RemnantOutline outline,
+    public static NewRemnant manualMm(MaterialType material, double thicknessMm, RemnantOutline outline,
                                       String location) {
         return new NewRemnant(material, null, thicknessMm, outline, location, RemnantSource.manual());
     }
 
     /** The offcut left from sheet {@code sheet} of job {@code job}, same material as the sheet. */
-    public static NewRemnant offcut(RemnantMaterial material, Integer gauge, Double thicknessMm,
+    public static NewRemnant offcut(MaterialType material, Integer gauge, Double thicknessMm,
                                     RemnantOutline outline, String location, String job, int sheet) {
         return new NewRemnant(material, gauge, thicknessMm, outline, location, RemnantSource.job(job, sheet));
     }

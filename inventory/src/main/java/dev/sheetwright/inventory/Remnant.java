@@ -1,5 +1,6 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.material.MaterialType;
 import java.time.Instant;
 import org.locationtech.jts.geom.Polygon;
 
@@ -18,7 +19,7 @@ import org.locationtech.jts.geom.Polygon;
  * @param reservedBy    the plan id holding it, or null when not reserved
  * @param reservedUntil when that reservation expires, or null when not reserved
  */
-public record Remnant(String id, RemnantMaterial material, Integer gauge, Double thicknessMm, RemnantOutline outline,
+public record Remnant(String id, MaterialType material, Integer gauge, Double thicknessMm, RemnantOutline outline,
                       String location, Instant added, RemnantSource source, RemnantState state, String reservedBy,
                       Instant reservedUntil) {
     public Remnant {

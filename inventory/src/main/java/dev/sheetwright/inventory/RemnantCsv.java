@@ -1,5 +1,6 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.material.MaterialType;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.io.Writer;
@@ -140,7 +141,7 @@ final class RemnantCsv {
             try {
                 String id = cell("id");
                 Long seq = id.isEmpty() ? null : RemnantId.parse(id);
-                RemnantMaterial material = RemnantMaterial.parse(cell("material"));
+                MaterialType material = MaterialType.parse(cell("material"));
                 String g = cell("gauge");
                 Integer gauge = g.isEmpty() ? null : parseInt(g);
                 String t = cell("thickness_mm");

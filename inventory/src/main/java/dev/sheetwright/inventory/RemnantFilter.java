@@ -1,5 +1,7 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.material.MaterialType;
+
 /**
  * Which remnants a listing or a reservation considers. A null field matches everything.
  *
@@ -13,7 +15,7 @@ package dev.sheetwright.inventory;
  * @param minAreaMm2  only remnants of at least this area (mm²), or null
  * @param includeUsed whether listings include remnants already used; reservations never take used ones
  */
-public record RemnantFilter(RemnantMaterial material, Integer gauge, Double thicknessMm, Double minAreaMm2,
+public record RemnantFilter(MaterialType material, Integer gauge, Double thicknessMm, Double minAreaMm2,
                             boolean includeUsed) {
     /** Two thicknesses closer than this (mm) are the same thickness. */
     public static final double THICKNESS_MATCH_MM = 0.005;
@@ -36,7 +38,7 @@ public record RemnantFilter(RemnantMaterial material, Integer gauge, Double thic
         return new RemnantFilter(null, null, null, null, false);
     }
 
-    public RemnantFilter withMaterial(RemnantMaterial m) {
+    public RemnantFilter withMaterial(MaterialType m) {
         return new RemnantFilter(m, gauge, thicknessMm, minAreaMm2, includeUsed);
     }
 

@@ -1,5 +1,6 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.units.LengthUnit;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
@@ -142,7 +143,7 @@ public record RemnantOutline(List<OutlinePoint> vertices) {
 
     /** Parses {@code "x1,y1 x2,y2 ..."} in millimetres; see {@link #parse(String, LengthUnit)}. */
     public static RemnantOutline parse(String text) {
-        return parse(text, LengthUnit.MM);
+        return parse(text, LengthUnit.MILLIMETRE);
     }
 
     /** The corners as {@code "x1,y1 x2,y2 ..."} in millimetres; {@link #parse(String)} reads it back exactly. */

@@ -1,5 +1,6 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.material.MaterialType;
 import java.io.IOException;
 import java.io.Writer;
 import java.nio.file.Files;
@@ -223,10 +224,7 @@ public final class RemnantStore implements AutoCloseable {
     /** Deletes several remnants at once: all of them, or, if one cannot be removed, none. */
     public synchronized void removeAll(Collection<String> ids) {
         requireNonNull("ids", ids);
-        Set<Long> seqs = new TreeSet<>();
-        for (String id : ids) {
-            seqs.add(RemnantId.parse(id));
-        }
+        Set<Long> seqs = seqsOf(ids);
         transaction(() -> {
             Instant now = now();
             for (long seq : seqs) {
@@ -298,8 +296,7 @@ public final class RemnantStore implements AutoCloseable {
     /** Returns every remnant reserved for {@code planId} to {@code available}; returns how many. */
     public synchronized int release(String planId) {
         checkPlanId(planId);
-        return transaction(() -> update("UPDATE remnant SET state = 'available', reserved_by = NULL,"
-                + " reserved_until = NULL WHERE state = 'reserved' AND reserved_by = ?", List.of(planId)));
+        return transaction(() -> releaseAllBut(planId, Set.of()));
     }
 
     /**
@@ -316,10 +313,7 @@ public final class RemnantStore implements AutoCloseable {
         checkPlanId(planId);
         requireNonNull("usedIds", usedIds);
         requireNonNull("newOffcuts", newOffcuts);
-        Set<Long> seqs = new TreeSet<>();
-        for (String id : usedIds) {
-            seqs.add(RemnantId.parse(id));
-        }
+        Set<Long> seqs = seqsOf(usedIds);
         for (int i = 0; i < newOffcuts.size(); i++) {
             if (newOffcuts.get(i) == null) {
                 throw new IllegalArgumentException("newOffcuts: element " + i + " is null");
@@ -327,8 +321,7 @@ public final class RemnantStore implements AutoCloseable {
         }
         return transaction(() -> {
             markUsed(planId, seqs);
-            update("UPDATE remnant SET state = 'available', reserved_by = NULL, reserved_until = NULL"
-                    + " WHERE state = 'reserved' AND reserved_by = ?", List.of(planId));
+            releaseAllBut(planId, Set.of());
             List<Remnant> added = new ArrayList<>();
             Instant now = now();
             for (NewRemnant offcut : newOffcuts) {
@@ -337,6 +330,20 @@ public final class RemnantStore implements AutoCloseable {
             }
             return List.copyOf(added);
         });
+    }
+
+    /** Returns the remnants reserved for {@code planId}, except {@code keep}, to {@code available}; returns how many. */
+    private int releaseAllBut(String planId, Set<Long> keep) throws SQLException {
+        List<Object> args = new ArrayList<>();
+        args.add(planId);
+        StringBuilder marks = new StringBuilder();
+        for (long seq : keep) {
+            marks.append(marks.length() == 0 ? "" : ", ").append('?');
+            args.add(seq);
+        }
+        return update("UPDATE remnant SET state = 'available', reserved_by = NULL, reserved_until = NULL"
+                + " WHERE state = 'reserved' AND reserved_by = ?"
+                + (keep.isEmpty() ? "" : " AND seq NOT IN (" + marks + ")"), args);
     }
 
     /** Marks {@code seqs} used; each must be reserved by {@code planId} (an expired lease nobody took counts). */
@@ -375,10 +382,7 @@ public final class RemnantStore implements AutoCloseable {
         requireNonNull("ids", ids);
         checkPlanId(planId);
         checkTtl(ttl);
-        Set<Long> seqs = new TreeSet<>();
-        for (String id : ids) {
-            seqs.add(RemnantId.parse(id));
-        }
+        Set<Long> seqs = seqsOf(ids);
         return transaction(() -> {
             Instant now = now();
             long until = now.toEpochMilli() + ttl.toMillis();
@@ -418,10 +422,7 @@ public final class RemnantStore implements AutoCloseable {
             throw new IllegalArgumentException("offcutCount: " + offcutCount + " is out of range; must be 0 to "
                     + MAX_OFFCUTS_PER_PLAN);
         }
-        Set<Long> seqs = new TreeSet<>();
-        for (String id : usedIds) {
-            seqs.add(RemnantId.parse(id));
-        }
+        Set<Long> seqs = seqsOf(usedIds);
         return transaction(() -> {
             if (plan(planId).isPresent()) {
                 throw new RemnantConflictException("plan " + planId + " was settled before; make a new plan");
@@ -440,16 +441,7 @@ public final class RemnantStore implements AutoCloseable {
                 update("UPDATE remnant SET reserved_until = ? WHERE seq = ?", List.of(until, seq));
                 kept.add(get(seq).orElseThrow());
             }
-            List<Object> args = new ArrayList<>();
-            args.add(planId);
-            StringBuilder keep = new StringBuilder();
-            for (long seq : seqs) {
-                keep.append(keep.length() == 0 ? "" : ", ").append('?');
-                args.add(seq);
-            }
-            update("UPDATE remnant SET state = 'available', reserved_by = NULL, reserved_until = NULL"
-                    + " WHERE state = 'reserved' AND reserved_by = ?"
-                    + (seqs.isEmpty() ? "" : " AND seq NOT IN (" + keep + ")"), args);
+            releaseAllBut(planId, seqs);
             update("INSERT INTO plan (id, job, made, committed) VALUES (?, ?, ?, NULL)",
                     List.of(planId, RemnantSource.job(job, 1).job(), now.toString()));
             long issued = highestIssued();
@@ -484,10 +476,7 @@ public final class RemnantStore implements AutoCloseable {
         checkPlanId(planId);
         requireNonNull("usedIds", usedIds);
         requireNonNull("offcuts", offcuts);
-        Set<Long> seqs = new TreeSet<>();
-        for (String id : usedIds) {
-            seqs.add(RemnantId.parse(id));
-        }
+        Set<Long> seqs = seqsOf(usedIds);
         Map<Long, NewRemnant> bySeq = new LinkedHashMap<>();
         for (Map.Entry<String, NewRemnant> e : offcuts.entrySet()) {
             requireNonNull("offcut " + e.getKey(), e.getValue());
@@ -501,8 +490,7 @@ public final class RemnantStore implements AutoCloseable {
                         + "; nothing was changed");
             }
             markUsed(planId, seqs);
-            update("UPDATE remnant SET state = 'available', reserved_by = NULL, reserved_until = NULL"
-                    + " WHERE state = 'reserved' AND reserved_by = ?", List.of(planId));
+            releaseAllBut(planId, Set.of());
             Instant now = now();
             List<Remnant> added = new ArrayList<>();
             for (Map.Entry<Long, NewRemnant> e : bySeq.entrySet()) {
@@ -735,7 +723,7 @@ public final class RemnantStore implements AutoCloseable {
         Double t = rs.wasNull() ? null : thickness;
         long until = rs.getLong("reserved_until");
         Instant u = rs.wasNull() ? null : Instant.ofEpochMilli(until);
-        return new Remnant(RemnantId.format(seq), RemnantMaterial.parse(rs.getString("material")), g, t,
+        return new Remnant(RemnantId.format(seq), MaterialType.parse(rs.getString("material")), g, t,
                 RemnantOutline.parse(rs.getString("outline")), rs.getString("location"),
                 Instant.parse(rs.getString("added")), RemnantSource.parse(rs.getString("source")),
                 RemnantState.parse(rs.getString("state")), rs.getString("reserved_by"), u);
@@ -743,6 +731,15 @@ public final class RemnantStore implements AutoCloseable {
 
     private IllegalArgumentException noSuch(long seq) {
         return new IllegalArgumentException("no remnant " + RemnantId.format(seq) + " in " + file);
+    }
+
+    /** The sequence numbers of {@code ids}, ascending and without repeats. */
+    private static Set<Long> seqsOf(Collection<String> ids) {
+        Set<Long> seqs = new TreeSet<>();
+        for (String id : ids) {
+            seqs.add(RemnantId.parse(id));
+        }
+        return seqs;
     }
 
     private static void checkPlanId(String planId) {

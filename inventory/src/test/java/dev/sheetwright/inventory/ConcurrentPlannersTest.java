@@ -3,6 +3,7 @@ package dev.sheetwright.inventory;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.sheetwright.core.material.MaterialType;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -33,7 +34,7 @@ class ConcurrentPlannersTest {
         Path file = dir.resolve("rack.db");
         try (RemnantStore store = RemnantStore.open(file)) {
             for (int i = 0; i < REMNANTS; i++) {
-                store.add(NewRemnant.manual(RemnantMaterial.GALVANIZED, 24,
+                store.add(NewRemnant.manual(MaterialType.GALVANIZED, 24,
                         RemnantOutline.rectangle(100 + i, 100), "A" + i));
             }
         }
@@ -120,7 +121,7 @@ class ConcurrentPlannersTest {
             List<Remnant> all = store.list(RemnantFilter.any().withIncludeUsed(true), RemnantSort.ID);
             assertEquals(2 * REMNANTS, all.size());
             for (Remnant r : all) {
-                RemnantState expected = r.material() == RemnantMaterial.GALVANIZED
+                RemnantState expected = r.material() == MaterialType.GALVANIZED
                         ? RemnantState.USED : RemnantState.AVAILABLE;
                 assertEquals(expected, r.state(), r.id());
             }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import dev.sheetwright.core.material.MaterialType;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
@@ -20,7 +21,7 @@ import org.junit.jupiter.api.io.TempDir;
 class PlanHoldTest {
     private static final Instant T0 = Instant.parse("2025-03-14T09:30:00Z");
     private static final Duration TTL = Duration.ofMinutes(15);
-    private static final RemnantFilter GALV = RemnantFilter.any().withMaterial(RemnantMaterial.GALVANIZED);
+    private static final RemnantFilter GALV = RemnantFilter.any().withMaterial(MaterialType.GALVANIZED);
 
     @TempDir
     Path dir;
@@ -34,16 +35,16 @@ class PlanHoldTest {
         try (RemnantStore store = RemnantStore.open(file, clock)) {
             store.add(galv(1200, 600));                                      // R-0001
             store.add(galv(600, 300));                                       // R-0002
-            store.add(NewRemnant.manual(RemnantMaterial.STEEL, 20, RemnantOutline.rectangle(500, 500), ""));
+            store.add(NewRemnant.manual(MaterialType.STEEL, 20, RemnantOutline.rectangle(500, 500), ""));
         }
     }
 
     private static NewRemnant galv(double w, double h) {
-        return NewRemnant.manual(RemnantMaterial.GALVANIZED, 24, RemnantOutline.rectangle(w, h), "rack");
+        return NewRemnant.manual(MaterialType.GALVANIZED, 24, RemnantOutline.rectangle(w, h), "rack");
     }
 
     private static NewRemnant offcut(double w, double h, int sheet) {
-        return NewRemnant.offcut(RemnantMaterial.GALVANIZED, 24, null, RemnantOutline.rectangle(w, h), "bay 2",
+        return NewRemnant.offcut(MaterialType.GALVANIZED, 24, null, RemnantOutline.rectangle(w, h), "bay 2",
                 "J-17", sheet);
     }
 

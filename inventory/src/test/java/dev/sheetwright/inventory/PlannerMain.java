@@ -1,5 +1,6 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.material.MaterialType;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -23,7 +24,7 @@ final class PlannerMain {
 
     static List<String> run(Path file, String planId) {
         List<String> lines = new ArrayList<>();
-        RemnantFilter galvanized = RemnantFilter.any().withMaterial(RemnantMaterial.GALVANIZED);
+        RemnantFilter galvanized = RemnantFilter.any().withMaterial(MaterialType.GALVANIZED);
         try (RemnantStore store = RemnantStore.open(file)) {
             for (int round = 1; ; round++) {
                 List<Remnant> got = store.reserve(galvanized, planId, Duration.ofMinutes(5), 1);
@@ -32,7 +33,7 @@ final class PlannerMain {
                 }
                 String used = got.get(0).id();
                 List<Remnant> offcuts = store.commit(planId, Set.of(used), List.of(NewRemnant.offcut(
-                        RemnantMaterial.STEEL, 20, null, RemnantOutline.rectangle(100, 50), "bin", planId, round)));
+                        MaterialType.STEEL, 20, null, RemnantOutline.rectangle(100, 50), "bin", planId, round)));
                 lines.add(used + " " + offcuts.get(0).id());
             }
         }

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.sheetwright.core.material.MaterialType;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -28,16 +29,16 @@ class RemnantCsvTest {
         List<Remnant> original;
         StringWriter csv = new StringWriter();
         try (RemnantStore a = RemnantStore.open(dir.resolve("a.db"), clock)) {
-            a.add(NewRemnant.manual(RemnantMaterial.GALVANIZED, 24, RemnantOutline.rectangle(1219.2, 762), "A1"));
+            a.add(NewRemnant.manual(MaterialType.GALVANIZED, 24, RemnantOutline.rectangle(1219.2, 762), "A1"));
             clock.advance(Duration.ofMinutes(5));
-            a.add(new NewRemnant(RemnantMaterial.STAINLESS, 18, 1.27,
+            a.add(new NewRemnant(MaterialType.STAINLESS, 18, 1.27,
                     RemnantOutline.parse("0,0 1000,0 1000,300.125 400,300.125 400,800 0,800"),
                     "rack \"B\", slot 3", RemnantSource.job("Smith, Kitchen", 2)));
-            a.add(NewRemnant.manualMm(RemnantMaterial.ALUMINUM, 0.8, RemnantOutline.rectangle(0.1, 1e-3), ""));
-            a.add(NewRemnant.manual(RemnantMaterial.STEEL, 16, RemnantOutline.rectangle(50, 50), "gone"));
+            a.add(NewRemnant.manualMm(MaterialType.ALUMINUM, 0.8, RemnantOutline.rectangle(0.1, 1e-3), ""));
+            a.add(NewRemnant.manual(MaterialType.STEEL, 16, RemnantOutline.rectangle(50, 50), "gone"));
             a.remove("R-0004");
             // R-0003 used by a plan, so the state column is exercised
-            a.reserve(RemnantFilter.any().withMaterial(RemnantMaterial.ALUMINUM), "p", Duration.ofMinutes(1));
+            a.reserve(RemnantFilter.any().withMaterial(MaterialType.ALUMINUM), "p", Duration.ofMinutes(1));
             a.commit("p", Set.of("R-0003"), List.of());
             a.exportCsv(csv);
             original = a.list(RemnantFilter.any().withIncludeUsed(true), RemnantSort.ID);
@@ -69,8 +70,8 @@ class RemnantCsvTest {
             List<Remnant> imported = store.importCsv(file);
 
             assertEquals(List.of("R-0002", "R-0001"), RemnantStoreTest.ids(imported));
-            assertEquals(RemnantMaterial.GALVANIZED, store.get("R-0002").orElseThrow().material());
-            assertEquals("R-0003", store.add(NewRemnant.manual(RemnantMaterial.STEEL, 20,
+            assertEquals(MaterialType.GALVANIZED, store.get("R-0002").orElseThrow().material());
+            assertEquals("R-0003", store.add(NewRemnant.manual(MaterialType.STEEL, 20,
                     RemnantOutline.rectangle(1, 1), "")).id());
         }
     }
@@ -82,7 +83,7 @@ class RemnantCsvTest {
                 + ",galvanized,26,,600,300,,A1,,,\n"
                 + ",steel,20,,-900,400,,A2,,,\n");
         try (RemnantStore store = RemnantStore.open(db)) {
-            store.add(NewRemnant.manual(RemnantMaterial.STEEL, 20, RemnantOutline.rectangle(10, 10), ""));
+            store.add(NewRemnant.manual(MaterialType.STEEL, 20, RemnantOutline.rectangle(10, 10), ""));
             List<String> before = InventorySnapshot.of(db);
 
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.importCsv(file));
@@ -95,8 +96,8 @@ class RemnantCsvTest {
 
     @Test
     void importCsv_badCells_nameTheirColumns() throws Exception {
-        assertImportError(",copper,26,,600,300,,,,,\n", "row 2, column material: unknown material 'copper';"
-                + " expected one of galvanized | steel | stainless | aluminum");
+        assertImportError(",copper,26,,600,300,,,,,\n", "row 2, column material: material 'copper' is not"
+                + " known; valid words: galvanized, steel, stainless, aluminum (or aluminium)");
         assertImportError(",steel,,,600,300,,,,,\n", "row 2, column gauge/thickness_mm: both are missing;"
                 + " give a gauge or a thickness");
         assertImportError(",steel,99,,600,300,,,,,\n", "row 2, column gauge: 99 is out of range; must be 1 to 38");
@@ -123,7 +124,7 @@ class RemnantCsvTest {
         Path db = dir.resolve("r.db");
         Path file = Files.writeString(dir.resolve("in.csv"), HEADER + "R-0001,steel,20,,600,300,,,,,\n");
         try (RemnantStore store = RemnantStore.open(db)) {
-            store.add(NewRemnant.manual(RemnantMaterial.STEEL, 20, RemnantOutline.rectangle(10, 10), ""));
+            store.add(NewRemnant.manual(MaterialType.STEEL, 20, RemnantOutline.rectangle(10, 10), ""));
             IllegalArgumentException inUse = assertThrows(IllegalArgumentException.class, () -> store.importCsv(file));
             assertEquals(file + " row 2, column id: R-0001 is already in " + db, inUse.getMessage());
 

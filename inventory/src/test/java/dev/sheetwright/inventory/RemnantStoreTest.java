@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.sheetwright.core.material.MaterialType;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -20,7 +21,7 @@ class RemnantStoreTest {
     Path dir;
 
     private static NewRemnant galv(double w, double h, String location) {
-        return NewRemnant.manual(RemnantMaterial.GALVANIZED, 24, RemnantOutline.rectangle(w, h), location);
+        return NewRemnant.manual(MaterialType.GALVANIZED, 24, RemnantOutline.rectangle(w, h), location);
     }
 
     @Test
@@ -94,13 +95,13 @@ class RemnantStoreTest {
         MutableClock clock = new MutableClock(T0);
         try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"), clock)) {
             RemnantOutline l = RemnantOutline.parse("0,0 1000,0 1000,300 400,300 400,800 0,800");
-            NewRemnant in = new NewRemnant(RemnantMaterial.STAINLESS, null, 1.2, l, "rack B, slot 3",
+            NewRemnant in = new NewRemnant(MaterialType.STAINLESS, null, 1.2, l, "rack B, slot 3",
                     RemnantSource.job("Smith Kitchen", 2));
 
             Remnant added = store.add(in);
 
             assertEquals("R-0001", added.id());
-            assertEquals(RemnantMaterial.STAINLESS, added.material());
+            assertEquals(MaterialType.STAINLESS, added.material());
             assertEquals(null, added.gauge());
             assertEquals(1.2, added.thicknessMm(), EPS);
             assertEquals(l, added.outline());
@@ -165,9 +166,9 @@ class RemnantStoreTest {
             clock.advance(java.time.Duration.ofHours(1));
             store.add(galv(1000, 400, "b"));                       // R-0002, 400000
             clock.advance(java.time.Duration.ofHours(1));
-            store.add(NewRemnant.manualMm(RemnantMaterial.ALUMINUM, 1.0,
+            store.add(NewRemnant.manualMm(MaterialType.ALUMINUM, 1.0,
                     RemnantOutline.rectangle(300, 300), "c"));      // R-0003, 90000
-            store.add(NewRemnant.manual(RemnantMaterial.GALVANIZED, 20,
+            store.add(NewRemnant.manual(MaterialType.GALVANIZED, 20,
                     RemnantOutline.rectangle(2000, 1000), "d"));    // R-0004, 2000000
 
             assertEquals(List.of("R-0003", "R-0001", "R-0002", "R-0004"),
@@ -175,7 +176,7 @@ class RemnantStoreTest {
             assertEquals(List.of("R-0004", "R-0002", "R-0001", "R-0003"),
                     ids(store.list(RemnantFilter.any(), RemnantSort.AREA_DESC)));
             assertEquals(List.of("R-0001", "R-0002"), ids(store.list(
-                    RemnantFilter.any().withMaterial(RemnantMaterial.GALVANIZED).withGauge(24), RemnantSort.ID)));
+                    RemnantFilter.any().withMaterial(MaterialType.GALVANIZED).withGauge(24), RemnantSort.ID)));
             assertEquals(List.of("R-0003"), ids(store.list(
                     RemnantFilter.any().withThicknessMm(1.001), RemnantSort.ID)));
             assertEquals(List.of("R-0002", "R-0004"), ids(store.list(

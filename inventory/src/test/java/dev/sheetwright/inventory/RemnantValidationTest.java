@@ -3,6 +3,8 @@ package dev.sheetwright.inventory;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import dev.sheetwright.core.material.MaterialType;
+import dev.sheetwright.core.units.LengthUnit;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -25,19 +27,6 @@ class RemnantValidationTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> RemnantOutline.rectangle(5, 0));
         assertEquals("height_mm: 0.0 is out of range; must be > 0 and at most 100000 mm", e.getMessage());
-    }
-
-    @Test
-    void parse_unknownMaterial_listsTheAcceptedWords() {
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> RemnantMaterial.parse("copper"));
-        assertEquals("material: unknown material 'copper'; expected one of galvanized | steel | stainless | aluminum",
-                e.getMessage());
-    }
-
-    @Test
-    void parse_materialInAnyCase_isAccepted() {
-        assertEquals(RemnantMaterial.STAINLESS, RemnantMaterial.parse(" StainLess "));
     }
 
     @Test
@@ -76,21 +65,21 @@ class RemnantValidationTest {
     @Test
     void newRemnant_neitherGaugeNorThickness_isRejected() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new NewRemnant(
-                RemnantMaterial.STEEL, null, null, RemnantOutline.rectangle(1, 1), "", null));
+                MaterialType.STEEL, null, null, RemnantOutline.rectangle(1, 1), "", null));
         assertEquals("gauge/thickness_mm: both are missing; give a gauge or a thickness", e.getMessage());
     }
 
     @Test
     void newRemnant_gaugeOutOfRange_namesRange() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> NewRemnant.manual(
-                RemnantMaterial.STEEL, 60, RemnantOutline.rectangle(1, 1), ""));
+                MaterialType.STEEL, 60, RemnantOutline.rectangle(1, 1), ""));
         assertEquals("gauge: 60 is out of range; must be 1 to 38", e.getMessage());
     }
 
     @Test
     void newRemnant_negativeThickness_namesRange() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> NewRemnant.manualMm(
-                RemnantMaterial.STEEL, -0.5, RemnantOutline.rectangle(1, 1), ""));
+                MaterialType.STEEL, -0.5, RemnantOutline.rectangle(1, 1), ""));
         assertEquals("thickness_mm: -0.5 is out of range; must be > 0 and at most 25 mm", e.getMessage());
     }
 
@@ -98,15 +87,15 @@ class RemnantValidationTest {
     void store_afterRejectedInputs_isUnchanged() {
         Path file = dir.resolve("r.db");
         try (RemnantStore store = RemnantStore.open(file)) {
-            store.add(NewRemnant.manual(RemnantMaterial.STEEL, 20, RemnantOutline.rectangle(100, 100), ""));
+            store.add(NewRemnant.manual(MaterialType.STEEL, 20, RemnantOutline.rectangle(100, 100), ""));
             List<String> before = InventorySnapshot.of(file);
 
             assertThrows(IllegalArgumentException.class, () -> store.add(NewRemnant.manual(
-                    RemnantMaterial.parse("copper"), 20, RemnantOutline.rectangle(100, 100), "")));
+                    MaterialType.parse("copper"), 20, RemnantOutline.rectangle(100, 100), "")));
             assertThrows(IllegalArgumentException.class, () -> store.add(NewRemnant.manual(
-                    RemnantMaterial.STEEL, 20, RemnantOutline.rectangle(-100, 100), "")));
+                    MaterialType.STEEL, 20, RemnantOutline.rectangle(-100, 100), "")));
             assertThrows(IllegalArgumentException.class, () -> store.add(NewRemnant.manual(
-                    RemnantMaterial.STEEL, 20, RemnantOutline.parse("0,0 10,10 10,0 0,10"), "")));
+                    MaterialType.STEEL, 20, RemnantOutline.parse("0,0 10,10 10,0 0,10"), "")));
             assertThrows(IllegalArgumentException.class, () -> store.add(null));
 
             assertEquals(before, InventorySnapshot.of(file));
@@ -119,15 +108,5 @@ class RemnantValidationTest {
         Path folder = Files.createDirectory(dir.resolve("folder"));
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> RemnantStore.open(folder));
         assertEquals("inventory: " + folder + " is a folder; give a database file", e.getMessage());
-    }
-
-    @Test
-    void lengthUnit_inch_isExactly25point4mm() {
-        assertEquals(1219.2, LengthUnit.IN.toMm(48));
-        assertEquals(762.0, LengthUnit.IN.toMm(30));
-        assertEquals(1217.6125, LengthUnit.IN.toMm(47.9375));
-        assertEquals(48.0, LengthUnit.IN.fromMm(1219.2));
-        assertEquals(2.5, LengthUnit.MM.toMm(2.5));
-        assertEquals(1.0, LengthUnit.IN.areaFromMm2(645.16), 1e-12);
     }
 }

@@ -3,6 +3,8 @@ package dev.sheetwright.cli.mixin;
 import dev.sheetwright.inventory.RemnantStore;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.function.Consumer;
+import java.util.function.Function;
 import picocli.CommandLine.Option;
 
 /** {@code --inventory FILE}: the remnant database to use (default {@code ~/.sheetwright/remnants.db}). */
@@ -24,6 +26,20 @@ public final class InventoryOption {
     /** Opens the inventory. */
     public RemnantStore open() {
         return RemnantStore.open(file());
+    }
+
+    /** Opens the inventory, returns what {@code work} makes of it, and closes it again. */
+    public <T> T apply(Function<RemnantStore, T> work) {
+        try (RemnantStore store = open()) {
+            return work.apply(store);
+        }
+    }
+
+    /** Opens the inventory, does {@code work} with it, and closes it again. */
+    public void use(Consumer<RemnantStore> work) {
+        try (RemnantStore store = open()) {
+            work.accept(store);
+        }
     }
 
     /**

@@ -1,7 +1,6 @@
 package dev.sheetwright.cli.mixin;
 
-import dev.sheetwright.inventory.LengthUnit;
-import java.util.Locale;
+import dev.sheetwright.core.units.LengthUnit;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.TypeConversionException;
@@ -10,26 +9,21 @@ import picocli.CommandLine.TypeConversionException;
 public final class UnitsOption {
     @Option(names = "--units", paramLabel = "in|mm", converter = UnitConverter.class, defaultValue = "in",
             description = "Unit of sizes typed and shown: in or mm (default: ${DEFAULT-VALUE}).")
-    private LengthUnit unit = LengthUnit.IN;
+    private LengthUnit unit = LengthUnit.INCH;
 
     public LengthUnit unit() {
         return unit;
     }
 
-    /** The unit's short word: {@code in} or {@code mm}. */
-    public static String word(LengthUnit unit) {
-        return unit.name().toLowerCase(Locale.ROOT);
-    }
-
-    /** Reads {@code in} or {@code mm}, ignoring case. */
+    /** Reads {@code in} or {@code mm} (or the words {@link LengthUnit#parse} knows), ignoring case. */
     public static final class UnitConverter implements ITypeConverter<LengthUnit> {
         @Override
         public LengthUnit convert(String value) {
-            return switch (value.strip().toLowerCase(Locale.ROOT)) {
-                case "in", "inch", "inches" -> LengthUnit.IN;
-                case "mm" -> LengthUnit.MM;
-                default -> throw new TypeConversionException("'" + value + "' is not a unit; expected in or mm");
-            };
+            try {
+                return LengthUnit.parse(value);
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException("'" + value + "' is not a unit; expected in or mm");
+            }
         }
     }
 }

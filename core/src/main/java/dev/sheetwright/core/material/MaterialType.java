@@ -21,6 +21,11 @@ public enum MaterialType {
         this.word = word;
     }
 
+    /** The accepted words, for messages and help: {@code galvanized, steel, stainless, aluminum (or aluminium)}. */
+    public static String validWords() {
+        return VALID_WORDS;
+    }
+
     /** The lowercase word used in job files and reports, e.g. {@code "galvanized"}. */
     public String word() {
         return word;

@@ -43,9 +43,14 @@ public record FractionFormat(int denominator) {
         return Math.round(value * denominator) / (double) denominator;
     }
 
-    /** A decimal with {@code places} decimals, no exponent, {@code .} as separator. */
+    /**
+     * A decimal with at most {@code places} decimals and no trailing zeros, no exponent, {@code .} as separator, e.g.
+     * {@code decimal(47.9375, 3) -> "47.938"}, {@code decimal(48.0, 3) -> "48"}. The shortest decimal that reads back
+     * as {@code value} is rounded half up, so a value typed as {@code 2.675} shows as {@code 2.68} to two places
+     * (rounding its binary expansion, 2.67499..., would give 2.67). Never {@code -0}.
+     */
     public static String decimal(double value, int places) {
-        return new BigDecimal(value).setScale(places, RoundingMode.HALF_UP).stripTrailingZeros().toPlainString()
-                .replaceFirst("^-0$", "0");
+        BigDecimal d = BigDecimal.valueOf(value).setScale(places, RoundingMode.HALF_UP).stripTrailingZeros();
+        return d.signum() == 0 ? "0" : d.toPlainString();
     }
 }

@@ -4,15 +4,20 @@ import java.util.Locale;
 
 /** The length unit a job is written in. Every length of a job is in its unit; conversions go through mm. */
 public enum LengthUnit {
-    INCH("in", 25.4),
-    MILLIMETRE("mm", 1.0);
+    INCH("in", 254, 10),
+    MILLIMETRE("mm", 1, 1);
 
     private final String symbol;
-    private final double mm;
+    // Millimetres per unit as an exact ratio (1 in = 254/10 mm by definition). Multiplying by 254 and then dividing
+    // by 10 rounds once per step and lands on the double nearest the true value where multiplying by 25.4 (itself
+    // not exact in binary) does not: 48 in gives 1219.2, not 1219.1999999999998.
+    private final double numerator;
+    private final double denominator;
 
-    LengthUnit(String symbol, double mm) {
+    LengthUnit(String symbol, double numerator, double denominator) {
         this.symbol = symbol;
-        this.mm = mm;
+        this.numerator = numerator;
+        this.denominator = denominator;
     }
 
     public String symbol() {
@@ -21,15 +26,22 @@ public enum LengthUnit {
 
     /** Millimetres in one of this unit (1 in = 25.4 mm exactly). */
     public double mmPerUnit() {
-        return mm;
+        return numerator / denominator;
     }
 
+    /** Converts a length in this unit to millimetres. */
     public double toMm(double value) {
-        return value * mm;
+        return value * numerator / denominator;
     }
 
+    /** Converts a length in millimetres to this unit. */
     public double fromMm(double valueMm) {
-        return valueMm / mm;
+        return valueMm * denominator / numerator;
+    }
+
+    /** Converts an area in square millimetres to square units of this unit. */
+    public double areaFromMm2(double areaMm2) {
+        return areaMm2 * (denominator * denominator) / (numerator * numerator);
     }
 
     /** Converts {@code value} given in {@code from} into this unit. */

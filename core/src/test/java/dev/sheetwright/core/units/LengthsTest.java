@@ -24,16 +24,4 @@ class LengthsTest {
                 + " (18 7/8 or 12-1/2)", e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> Lengths.parse("3/0"));
     }
-
-    @Test
-    void format_nearestSixteenth() {
-        FractionFormat f = FractionFormat.SIXTEENTHS;
-        assertEquals("18 7/8", f.format(18.8496));
-        assertEquals("3/8", f.format(0.375));
-        assertEquals("12", f.format(11.98));
-        assertEquals("-1 1/2", f.format(-1.5));
-        assertEquals("0", f.format(-0.01));
-        assertEquals("2 7/16", f.format(2.4115)); // Coey's drawn gore height [S:COEY] via trade-reference §3.5(a)
-        assertEquals("14 15/32", new FractionFormat(32).format(14.4693));
-    }
 }
