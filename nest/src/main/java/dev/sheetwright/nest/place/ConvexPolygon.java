@@ -17,8 +17,18 @@ final class ConvexPolygon {
     final double minY;
     final double maxX;
     final double maxY;
+    /**
+     * Edges that lie inside a larger region this polygon is one piece of (null: none). A point on such an edge is
+     * still inside the region, so those edges count as interior in {@link #containsStrictly}.
+     */
+    final boolean[] open;
 
     private ConvexPolygon(double[] xs, double[] ys) {
+        this(xs, ys, null);
+    }
+
+    private ConvexPolygon(double[] xs, double[] ys, boolean[] open) {
+        this.open = open;
         this.xs = xs;
         this.ys = ys;
         int n = xs.length;
@@ -56,15 +66,35 @@ final class ConvexPolygon {
     boolean containsStrictly(double px, double py, double tx, double ty, double eps) {
         double x = px - tx;
         double y = py - ty;
-        if (x <= minX + eps || x >= maxX - eps || y <= minY + eps || y >= maxY - eps) {
+        if (open == null && (x <= minX + eps || x >= maxX - eps || y <= minY + eps || y >= maxY - eps)) {
             return false;
         }
-        for (int i = 0; i < nx.length; i++) {
-            if (nx[i] * x + ny[i] * y - c[i] > -eps) {
-                return false;
+        if (x < minX - eps || x > maxX + eps || y < minY - eps || y > maxY + eps) {
+            return false;
+        }
+        if (open == null) {
+            for (int i = 0; i < nx.length; i++) {
+                if (nx[i] * x + ny[i] * y - c[i] > -eps) {
+                    return false;
+                }
+            }
+        } else {
+            for (int i = 0; i < nx.length; i++) {
+                if (nx[i] * x + ny[i] * y - c[i] > (open[i] ? eps : -eps)) {
+                    return false;
+                }
             }
         }
         return true;
+    }
+
+    /** Same polygon with edges marked open (interior to the region it is a piece of). */
+    ConvexPolygon withOpenEdges(boolean[] openEdges) {
+        return new ConvexPolygon(xs, ys, openEdges.clone());
+    }
+
+    boolean isOpen(int edge) {
+        return open != null && open[edge];
     }
 
     double area() {

@@ -11,6 +11,11 @@ final class Scratch {
     double[] ptx = new double[256];
     double[] pty = new double[256];
     int np;
+    boolean[] distinct = new boolean[256];
+    ConvexPolygon[] ec = new ConvexPolygon[256];
+    double[] etx = new double[256];
+    double[] ety = new double[256];
+    int ne;
 
     double[] cx = new double[1024];
     double[] cy = new double[1024];
@@ -31,6 +36,21 @@ final class Scratch {
 
     void clearPieces() {
         np = 0;
+        ne = 0;
+    }
+
+    /** A piece whose edges (all but the open ones) bound the region: source of candidate positions. */
+    void addEdgePiece(ConvexPolygon c, double x, double y) {
+        if (ne == ec.length) {
+            int n = ne * 2;
+            ec = Arrays.copyOf(ec, n);
+            etx = Arrays.copyOf(etx, n);
+            ety = Arrays.copyOf(ety, n);
+        }
+        ec[ne] = c;
+        etx[ne] = x;
+        ety[ne] = y;
+        ne++;
     }
 
     void addPiece(ConvexPolygon c, double x, double y) {
@@ -40,9 +60,13 @@ final class Scratch {
             ptx = Arrays.copyOf(ptx, n);
             pty = Arrays.copyOf(pty, n);
         }
+        if (np == distinct.length) {
+            distinct = Arrays.copyOf(distinct, np * 2);
+        }
         pc[np] = c;
         ptx[np] = x;
         pty[np] = y;
+        distinct[np] = false;
         np++;
     }
 
@@ -73,8 +97,8 @@ final class Scratch {
     /** Buckets pieces (by box) and their edges (by box) into a g x g grid over the rectangle. */
     void buildGrid(double x0, double y0, double x1, double y1) {
         int edges = 0;
-        for (int k = 0; k < np; k++) {
-            edges += pc[k].size();
+        for (int k = 0; k < ne; k++) {
+            edges += ec[k].size();
         }
         g = (int) Math.max(1, Math.min(96, Math.sqrt(edges / 3.0)));
         gx0 = x0;
@@ -122,15 +146,18 @@ final class Scratch {
         // edges
         Arrays.fill(counts, 0, cells + 1, 0);
         for (int pass = 0; pass < 2; pass++) {
-            for (int k = 0; k < np; k++) {
-                ConvexPolygon c = pc[k];
+            for (int k = 0; k < ne; k++) {
+                ConvexPolygon c = ec[k];
                 int n = c.size();
                 for (int i = 0; i < n; i++) {
+                    if (c.isOpen(i)) {
+                        continue;
+                    }
                     int j = i + 1 == n ? 0 : i + 1;
-                    double ax = c.xs[i] + ptx[k];
-                    double ay = c.ys[i] + pty[k];
-                    double bx = c.xs[j] + ptx[k];
-                    double by = c.ys[j] + pty[k];
+                    double ax = c.xs[i] + etx[k];
+                    double ay = c.ys[i] + ety[k];
+                    double bx = c.xs[j] + etx[k];
+                    double by = c.ys[j] + ety[k];
                     if (Math.max(ax, bx) < x0 || Math.min(ax, bx) > x1 || Math.max(ay, by) < y0 || Math.min(ay, by) > y1) {
                         continue;
                     }
@@ -175,16 +202,23 @@ final class Scratch {
 
     /** Piece vertices inside the rectangle, and crossings of piece edges with the rectangle's sides. */
     void collectVerticesAndBorderHits(double x0, double y0, double x1, double y1, double eps) {
-        for (int k = 0; k < np; k++) {
-            ConvexPolygon c = pc[k];
-            double tx = ptx[k];
-            double ty = pty[k];
+        for (int k = 0; k < ne; k++) {
+            ConvexPolygon c = ec[k];
+            double tx = etx[k];
+            double ty = ety[k];
             int n = c.size();
             for (int i = 0; i < n; i++) {
                 double ax = c.xs[i] + tx;
                 double ay = c.ys[i] + ty;
+                boolean openHere = c.isOpen(i);
+                if (openHere && c.isOpen(i == 0 ? n - 1 : i - 1)) {
+                    continue;
+                }
                 if (ax >= x0 - eps && ax <= x1 + eps && ay >= y0 - eps && ay <= y1 + eps) {
                     addCandidate(clamp(ax, x0, x1), clamp(ay, y0, y1));
+                }
+                if (openHere) {
+                    continue;
                 }
                 int j = i + 1 == n ? 0 : i + 1;
                 double bx = c.xs[j] + tx;
@@ -193,6 +227,23 @@ final class Scratch {
                 vertical(ax, ay, bx, by, x1, y0, y1);
                 horizontal(ax, ay, bx, by, y0, x0, x1);
                 horizontal(ax, ay, bx, by, y1, x0, x1);
+            }
+        }
+    }
+
+    /** Vertices of the test pieces (needed where a union has hidden zero-width slits). */
+    void collectTestVertices(double x0, double y0, double x1, double y1, double eps, boolean[] distinct) {
+        for (int k = 0; k < np; k++) {
+            if (!distinct[k]) {
+                continue;
+            }
+            ConvexPolygon c = pc[k];
+            for (int i = 0; i < c.size(); i++) {
+                double ax = c.xs[i] + ptx[k];
+                double ay = c.ys[i] + pty[k];
+                if (ax >= x0 - eps && ax <= x1 + eps && ay >= y0 - eps && ay <= y1 + eps) {
+                    addCandidate(clamp(ax, x0, x1), clamp(ay, y0, y1));
+                }
             }
         }
     }
@@ -242,13 +293,13 @@ final class Scratch {
             }
             for (int e = from; e < to; e++) {
                 int k1 = edgePiece[e];
-                ConvexPolygon c1 = pc[k1];
+                ConvexPolygon c1 = ec[k1];
                 int i1 = edgeIdx[e];
                 int j1 = i1 + 1 == c1.size() ? 0 : i1 + 1;
-                double ax = c1.xs[i1] + ptx[k1];
-                double ay = c1.ys[i1] + pty[k1];
-                double rx = c1.xs[j1] + ptx[k1] - ax;
-                double ry = c1.ys[j1] + pty[k1] - ay;
+                double ax = c1.xs[i1] + etx[k1];
+                double ay = c1.ys[i1] + ety[k1];
+                double rx = c1.xs[j1] + etx[k1] - ax;
+                double ry = c1.ys[j1] + ety[k1] - ay;
                 double e1x0 = Math.min(ax, ax + rx);
                 double e1x1 = Math.max(ax, ax + rx);
                 double e1y0 = Math.min(ay, ay + ry);
@@ -258,13 +309,13 @@ final class Scratch {
                     if (k2 == k1) {
                         continue;
                     }
-                    ConvexPolygon c2 = pc[k2];
+                    ConvexPolygon c2 = ec[k2];
                     int i2 = edgeIdx[f];
                     int j2 = i2 + 1 == c2.size() ? 0 : i2 + 1;
-                    double qx = c2.xs[i2] + ptx[k2];
-                    double qy = c2.ys[i2] + pty[k2];
-                    double sx = c2.xs[j2] + ptx[k2] - qx;
-                    double sy = c2.ys[j2] + pty[k2] - qy;
+                    double qx = c2.xs[i2] + etx[k2];
+                    double qy = c2.ys[i2] + ety[k2];
+                    double sx = c2.xs[j2] + etx[k2] - qx;
+                    double sy = c2.ys[j2] + ety[k2] - qy;
                     if (Math.max(qx, qx + sx) < e1x0 || Math.min(qx, qx + sx) > e1x1
                             || Math.max(qy, qy + sy) < e1y0 || Math.min(qy, qy + sy) > e1y1) {
                         continue;
