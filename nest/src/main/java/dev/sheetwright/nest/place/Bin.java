@@ -133,7 +133,7 @@ final class Bin {
                 }
             }
         }
-        s.buildGrid(ix0, iy0, ix1, iy1);
+        s.buildGrid(ix0, iy0, ix1, iy1, eps);
         s.clearCandidates();
         s.addCandidate(ix0, iy0);
         s.addCandidate(ix1, iy0);

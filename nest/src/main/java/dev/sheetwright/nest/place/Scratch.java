@@ -7,6 +7,9 @@ import java.util.Arrays;
  * the inner-fit rectangle, and the candidate points.
  */
 final class Scratch {
+    /** Grid cells per side at most, and cells per bounding edge: tuned on the strip benchmarks. */
+    private static final int GRID_MAX = 128;
+    private static final double GRID_DENSITY = 1.0;
     ConvexPolygon[] pc = new ConvexPolygon[256];
     double[] ptx = new double[256];
     double[] pty = new double[256];
@@ -75,6 +78,9 @@ final class Scratch {
     }
 
     void addCandidate(double x, double y) {
+        if (isCovered(x, y)) {
+            return;
+        }
         if (nc == cx.length) {
             cx = Arrays.copyOf(cx, nc * 2);
             cy = Arrays.copyOf(cy, nc * 2);
@@ -95,12 +101,12 @@ final class Scratch {
     }
 
     /** Buckets pieces (by box) and their edges (by box) into a g x g grid over the rectangle. */
-    void buildGrid(double x0, double y0, double x1, double y1) {
+    void buildGrid(double x0, double y0, double x1, double y1, double eps) {
         int edges = 0;
         for (int k = 0; k < ne; k++) {
             edges += ec[k].size();
         }
-        g = (int) Math.max(1, Math.min(96, Math.sqrt(edges / 3.0)));
+        g = (int) Math.max(1, Math.min(GRID_MAX, Math.sqrt(edges * GRID_DENSITY)));
         gx0 = x0;
         gy0 = y0;
         cellW = Math.max((x1 - x0) / g, 1e-300);
@@ -143,6 +149,7 @@ final class Scratch {
                 }
             }
         }
+        markCovered(eps);
         // edges
         Arrays.fill(counts, 0, cells + 1, 0);
         for (int pass = 0; pass < 2; pass++) {
@@ -188,6 +195,38 @@ final class Scratch {
                 Arrays.fill(counts, 0, cells, 0);
             }
         }
+    }
+
+    /** covered[cell]: the whole closed cell lies strictly inside one test piece, so it holds no feasible point. */
+    private boolean[] covered = new boolean[1];
+
+    private void markCovered(double eps) {
+        int cells = g * g;
+        if (covered.length < cells) {
+            covered = new boolean[cells];
+        }
+        for (int cell = 0; cell < cells; cell++) {
+            covered[cell] = false;
+            int a = cell % g;
+            int b = cell / g;
+            double lx = gx0 + a * cellW;
+            double ly = gy0 + b * cellH;
+            double hx = lx + cellW;
+            double hy = ly + cellH;
+            for (int p = pieceStart[cell], e = pieceStart[cell + 1]; p < e; p++) {
+                int k = pieceCells[p];
+                ConvexPolygon c = pc[k];
+                if (c.containsStrictly(lx, ly, ptx[k], pty[k], eps) && c.containsStrictly(hx, hy, ptx[k], pty[k], eps)
+                        && c.containsStrictly(lx, hy, ptx[k], pty[k], eps) && c.containsStrictly(hx, ly, ptx[k], pty[k], eps)) {
+                    covered[cell] = true;
+                    break;
+                }
+            }
+        }
+    }
+
+    private boolean isCovered(double x, double y) {
+        return covered[cellY(y) * g + cellX(x)];
     }
 
     private int prefix(int[] start, int cells) {
@@ -276,7 +315,7 @@ final class Scratch {
         for (int cell = 0; cell < cells; cell++) {
             int from = edgeStart[cell];
             int to = edgeStart[cell + 1];
-            if (to - from < 2) {
+            if (to - from < 2 || covered[cell]) {
                 continue;
             }
             int ca = cell % g;
