@@ -105,10 +105,17 @@ final class Bin {
                 }
             }
             boolean union = nfp.outline != nfp.parts;
+            int group = nfp.pockets.length == 0 ? -1 : s.addGroup(nfp.pockets, px, py);
             for (ConvexPolygon c : nfp.parts) {
                 if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
                     s.addPiece(c, px, py);
                     s.distinct[s.np - 1] = union;
+                    s.owner[s.np - 1] = group;
+                }
+            }
+            for (ConvexPolygon c : nfp.pockets) {
+                if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
+                    s.addEdgePiece(c, px, py);
                 }
             }
             if (union) {

@@ -167,6 +167,62 @@ final class ConvexPolygon {
         return hull(px, py, n);
     }
 
+    /** Largest value of n . v over the vertices. */
+    double support(double ux, double uy) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < xs.length; i++) {
+            m = Math.max(m, ux * xs[i] + uy * ys[i]);
+        }
+        return m;
+    }
+
+    /**
+     * The convex polygon {p : a_i . p <= b_i for all i} clipped to the box, or null if it has no area.
+     * Sutherland-Hodgman clipping of the box by each half-plane.
+     */
+    static ConvexPolygon fromHalfPlanes(double[] ax, double[] ay, double[] b, double x0, double y0, double x1, double y1) {
+        double[] px = {x0, x1, x1, x0};
+        double[] py = {y0, y0, y1, y1};
+        int n = 4;
+        for (int h = 0; h < b.length && n >= 3; h++) {
+            double[] qx = new double[n + 1];
+            double[] qy = new double[n + 1];
+            int m = 0;
+            for (int i = 0; i < n; i++) {
+                int j = (i + 1) % n;
+                double di = ax[h] * px[i] + ay[h] * py[i] - b[h];
+                double dj = ax[h] * px[j] + ay[h] * py[j] - b[h];
+                if (di <= 0) {
+                    qx[m] = px[i];
+                    qy[m] = py[i];
+                    m++;
+                }
+                if ((di < 0 && dj > 0) || (di > 0 && dj < 0)) {
+                    double t = di / (di - dj);
+                    qx[m] = px[i] + t * (px[j] - px[i]);
+                    qy[m] = py[i] + t * (py[j] - py[i]);
+                    m++;
+                }
+            }
+            px = qx;
+            py = qy;
+            n = m;
+        }
+        return n < 3 ? null : hull(px, py, n);
+    }
+
+    /** Whether (px, py) - (tx, ty) lies inside or on this polygon, within eps. */
+    boolean containsClosed(double px, double py, double tx, double ty, double eps) {
+        double x = px - tx;
+        double y = py - ty;
+        for (int i = 0; i < nx.length; i++) {
+            if (nx[i] * x + ny[i] * y - c[i] > eps) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     static ConvexPolygon of(double[] xs, double[] ys) {
         return hull(xs, ys, xs.length);
     }

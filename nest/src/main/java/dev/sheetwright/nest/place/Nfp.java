@@ -25,6 +25,8 @@ final class Nfp {
      * sums), used to generate candidate positions; the same array as {@link #parts} when no union was formed.
      */
     final ConvexPolygon[] outline;
+    /** Convex regions inside the no-fit region where the moving part sits in a hole (or around the fixed one). */
+    final ConvexPolygon[] pockets;
     final double minX;
     final double minY;
     final double maxX;
@@ -35,6 +37,11 @@ final class Nfp {
     }
 
     Nfp(List<ConvexPolygon> parts, List<ConvexPolygon> outline) {
+        this(parts, outline, List.of());
+    }
+
+    Nfp(List<ConvexPolygon> parts, List<ConvexPolygon> outline, List<ConvexPolygon> pockets) {
+        this.pockets = pockets.toArray(new ConvexPolygon[0]);
         this.parts = parts.toArray(new ConvexPolygon[0]);
         this.outline = outline == null ? this.parts : outline.toArray(new ConvexPolygon[0]);
         double[] b = Orientation.bounds(this.parts);
@@ -42,6 +49,61 @@ final class Nfp {
         minY = b[1];
         maxX = b[2];
         maxY = b[3];
+    }
+
+    /** No-fit polygon of two orientations, with the pockets of their holes. */
+    static Nfp of(Orientation fixed, Orientation moving) {
+        Nfp base = of(fixed.spacing, moving.spacing);
+        if (fixed.holes.length == 0 && moving.holes.length == 0) {
+            return base;
+        }
+        List<ConvexPolygon> pockets = new ArrayList<>();
+        double pad = 1 + Math.max(base.maxX - base.minX, base.maxY - base.minY);
+        double x0 = base.minX - pad;
+        double y0 = base.minY - pad;
+        double x1 = base.maxX + pad;
+        double y1 = base.maxY + pad;
+        for (ConvexPolygon h : fixed.holes) {
+            // moving part inside the fixed part's hole: n . (p + v) <= c for every vertex v of the moving part
+            int n = h.size();
+            double[] ax = new double[n];
+            double[] ay = new double[n];
+            double[] b = new double[n];
+            for (int i = 0; i < n; i++) {
+                ax[i] = h.nx[i];
+                ay[i] = h.ny[i];
+                b[i] = h.c[i] - support(moving.spacing, h.nx[i], h.ny[i]);
+            }
+            ConvexPolygon p = ConvexPolygon.fromHalfPlanes(ax, ay, b, x0, y0, x1, y1);
+            if (p != null) {
+                pockets.add(p);
+            }
+        }
+        for (ConvexPolygon h : moving.holes) {
+            // fixed part inside the moving part's hole: n . (a - p) <= c for every vertex a of the fixed part
+            int n = h.size();
+            double[] ax = new double[n];
+            double[] ay = new double[n];
+            double[] b = new double[n];
+            for (int i = 0; i < n; i++) {
+                ax[i] = -h.nx[i];
+                ay[i] = -h.ny[i];
+                b[i] = h.c[i] - support(fixed.spacing, h.nx[i], h.ny[i]);
+            }
+            ConvexPolygon p = ConvexPolygon.fromHalfPlanes(ax, ay, b, x0, y0, x1, y1);
+            if (p != null) {
+                pockets.add(p);
+            }
+        }
+        return new Nfp(List.of(base.parts), List.of(base.outline), pockets);
+    }
+
+    private static double support(ConvexPolygon[] parts, double ux, double uy) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (ConvexPolygon c : parts) {
+            m = Math.max(m, c.support(ux, uy));
+        }
+        return m;
     }
 
     static Nfp of(ConvexPolygon[] fixed, ConvexPolygon[] moving) {
@@ -132,7 +194,7 @@ final class Nfp {
             long key = ((long) fixedId << 32) | movingId;
             Nfp n = map.get(key);
             if (n == null) {
-                n = of(orientations.get(fixedId).spacing, orientations.get(movingId).spacing);
+                n = of(orientations.get(fixedId), orientations.get(movingId));
                 Nfp prev = map.putIfAbsent(key, n);
                 if (prev != null) {
                     n = prev;

@@ -13,6 +13,8 @@ final class Orientation {
     final boolean mirrored;
     final ConvexPolygon[] spacing;
     final ConvexPolygon[] body;
+    /** Convex pieces of the holes of the spacing shape: pockets where other parts may sit. */
+    final ConvexPolygon[] holes;
     final double sMinX;
     final double sMinY;
     final double sMaxX;
@@ -22,7 +24,9 @@ final class Orientation {
     final double bMaxX;
     final double bMaxY;
 
-    Orientation(int id, int type, double angleDeg, boolean mirrored, List<ConvexPolygon> spacing, List<ConvexPolygon> body) {
+    Orientation(int id, int type, double angleDeg, boolean mirrored, List<ConvexPolygon> spacing, List<ConvexPolygon> body,
+                List<ConvexPolygon> holes) {
+        this.holes = holes.toArray(new ConvexPolygon[0]);
         this.id = id;
         this.type = type;
         this.angleDeg = angleDeg;

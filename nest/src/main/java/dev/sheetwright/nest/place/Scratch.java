@@ -15,6 +15,15 @@ final class Scratch {
     double[] pty = new double[256];
     int np;
     boolean[] distinct = new boolean[256];
+    /** owner[k]: pocket group of test piece k, or -1. */
+    int[] owner = new int[256];
+    ConvexPolygon[] pockets = new ConvexPolygon[16];
+    double[] pocketX = new double[16];
+    double[] pocketY = new double[16];
+    int npk;
+    /** Pockets of group g are pockets[groupStart[g] .. groupStart[g + 1]). */
+    int[] groupStart = new int[17];
+    int groups;
     ConvexPolygon[] ec = new ConvexPolygon[256];
     double[] etx = new double[256];
     double[] ety = new double[256];
@@ -40,6 +49,49 @@ final class Scratch {
     void clearPieces() {
         np = 0;
         ne = 0;
+        npk = 0;
+        groups = 0;
+        groupStart[0] = 0;
+    }
+
+    /** Starts a pocket group (the pockets of one no-fit polygon); returns its index. */
+    int addGroup(ConvexPolygon[] ps, double x, double y) {
+        for (ConvexPolygon c : ps) {
+            if (npk == pockets.length) {
+                pockets = Arrays.copyOf(pockets, npk * 2);
+                pocketX = Arrays.copyOf(pocketX, npk * 2);
+                pocketY = Arrays.copyOf(pocketY, npk * 2);
+            }
+            pockets[npk] = c;
+            pocketX[npk] = x;
+            pocketY[npk] = y;
+            npk++;
+        }
+        if (groups + 2 > groupStart.length) {
+            groupStart = Arrays.copyOf(groupStart, groupStart.length * 2);
+        }
+        groups++;
+        groupStart[groups] = npk;
+        return groups - 1;
+    }
+
+    private boolean inPocket(int group, double x, double y, double eps) {
+        for (int q = groupStart[group]; q < groupStart[group + 1]; q++) {
+            if (pockets[q].containsClosed(x, y, pocketX[q], pocketY[q], eps)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private boolean pocketTouches(int group, double lx, double ly, double hx, double hy) {
+        for (int q = groupStart[group]; q < groupStart[group + 1]; q++) {
+            ConvexPolygon c = pockets[q];
+            if (c.minX + pocketX[q] <= hx && c.maxX + pocketX[q] >= lx && c.minY + pocketY[q] <= hy && c.maxY + pocketY[q] >= ly) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** A piece whose edges (all but the open ones) bound the region: source of candidate positions. */
@@ -65,7 +117,9 @@ final class Scratch {
         }
         if (np == distinct.length) {
             distinct = Arrays.copyOf(distinct, np * 2);
+            owner = Arrays.copyOf(owner, np * 2);
         }
+        owner[np] = -1;
         pc[np] = c;
         ptx[np] = x;
         pty[np] = y;
@@ -217,7 +271,8 @@ final class Scratch {
                 int k = pieceCells[p];
                 ConvexPolygon c = pc[k];
                 if (c.containsStrictly(lx, ly, ptx[k], pty[k], eps) && c.containsStrictly(hx, hy, ptx[k], pty[k], eps)
-                        && c.containsStrictly(lx, hy, ptx[k], pty[k], eps) && c.containsStrictly(hx, ly, ptx[k], pty[k], eps)) {
+                        && c.containsStrictly(lx, hy, ptx[k], pty[k], eps) && c.containsStrictly(hx, ly, ptx[k], pty[k], eps)
+                        && (owner[k] < 0 || !pocketTouches(owner[k], lx - eps, ly - eps, hx + eps, hy + eps))) {
                     covered[cell] = true;
                     break;
                 }
@@ -385,7 +440,7 @@ final class Scratch {
         int cell = cellY(y) * g + cellX(x);
         for (int p = pieceStart[cell], e = pieceStart[cell + 1]; p < e; p++) {
             int k = pieceCells[p];
-            if (pc[k].containsStrictly(x, y, ptx[k], pty[k], eps)) {
+            if (pc[k].containsStrictly(x, y, ptx[k], pty[k], eps) && (owner[k] < 0 || !inPocket(owner[k], x, y, eps))) {
                 return false;
             }
         }
