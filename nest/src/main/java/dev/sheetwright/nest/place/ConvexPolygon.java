@@ -223,6 +223,25 @@ final class ConvexPolygon {
         return true;
     }
 
+    /**
+     * A closed ring kept exactly as given (not necessarily convex): only its edges and vertices are used, as a
+     * source of candidate positions.
+     */
+    static ConvexPolygon ring(org.locationtech.jts.geom.Coordinate[] closed) {
+        int n = closed.length - 1;
+        double[] xs = new double[n];
+        double[] ys = new double[n];
+        for (int i = 0; i < n; i++) {
+            xs[i] = closed[i].x;
+            ys[i] = closed[i].y;
+        }
+        return new ConvexPolygon(xs, ys);
+    }
+
+    static ConvexPolygon ring(double[] xs, double[] ys) {
+        return new ConvexPolygon(xs, ys);
+    }
+
     static ConvexPolygon of(double[] xs, double[] ys) {
         return hull(xs, ys, xs.length);
     }

@@ -4,13 +4,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.ConcurrentHashMap;
 
-import org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator;
 import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.Envelope;
-import org.locationtech.jts.geom.Location;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
-import org.locationtech.jts.operation.union.CascadedPolygonUnion;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.operation.overlayng.UnaryUnionNG;
 
 /**
  * No-fit polygon of a moving orientation against a fixed one, kept as the list of convex Minkowski sums
@@ -118,7 +116,7 @@ final class Nfp {
         }
         if (out.size() > UNION_ABOVE) {
             List<ConvexPolygon> merged = unionAndSplit(out);
-            if (merged != null && merged.size() < out.size()) {
+            if (merged != null) {
                 return new Nfp(out, merged);
             }
         }
@@ -126,11 +124,16 @@ final class Nfp {
     }
 
     /** Above this many convex sums the union is formed and split again into (fewer) convex pieces. */
-    static final int UNION_ABOVE = 4;
+    static final int UNION_ABOVE = 12;
     private static final GeometryFactory GF = new GeometryFactory();
 
+    /**
+     * Boundary rings of the union of the sums (exterior and holes), each kept as a closed edge chain for candidate
+     * generation only; null if the union fails.
+     */
     private static List<ConvexPolygon> unionAndSplit(List<ConvexPolygon> parts) {
         List<Geometry> polys = new ArrayList<>();
+        int rawVertices = 0;
         for (ConvexPolygon c : parts) {
             Coordinate[] cs = new Coordinate[c.size() + 1];
             for (int i = 0; i < c.size(); i++) {
@@ -138,69 +141,78 @@ final class Nfp {
             }
             cs[c.size()] = cs[0].copy();
             polys.add(GF.createPolygon(cs));
+            rawVertices += c.size();
         }
         try {
-            Geometry u = CascadedPolygonUnion.union(polys);
+            Geometry u = UnaryUnionNG.union(GF.buildGeometry(polys), GF.getPrecisionModel());
             if (u == null || u.isEmpty()) {
                 return null;
             }
-            double before = 0;
-            List<ConvexPolygon> split = ConvexDecomposer.decompose(u);
-            for (ConvexPolygon c : split) {
-                before += c.area();
-            }
-            // the split must cover the union (same area up to rounding), otherwise keep the raw sums
-            if (Math.abs(before - u.getArea()) > 1e-9 * u.getArea()) {
-                return null;
-            }
-            // mark the edges shared inside the union: points on them are inside, not on the boundary
-            IndexedPointInAreaLocator loc = new IndexedPointInAreaLocator(u);
-            Envelope e = u.getEnvelopeInternal();
-            double delta = 1e-7 * Math.max(e.getWidth(), e.getHeight());
-            List<ConvexPolygon> out = new ArrayList<>();
-            for (ConvexPolygon c : split) {
-                int n = c.size();
-                boolean[] open = new boolean[n];
-                boolean any = false;
-                for (int i = 0; i < n; i++) {
-                    int j = (i + 1) % n;
-                    for (double f : new double[] {0.25, 0.5, 0.75}) {
-                        double px = c.xs[i] + f * (c.xs[j] - c.xs[i]) + c.nx[i] * delta;
-                        double py = c.ys[i] + f * (c.ys[j] - c.ys[i]) + c.ny[i] * delta;
-                        if (loc.locate(new Coordinate(px, py)) == Location.INTERIOR) {
-                            open[i] = true;
-                        }
-                    }
-                    any |= open[i];
+            List<ConvexPolygon> rings = new ArrayList<>();
+            int vertices = 0;
+            for (int g = 0; g < u.getNumGeometries(); g++) {
+                Polygon p = (Polygon) u.getGeometryN(g);
+                rings.add(ConvexPolygon.ring(p.getExteriorRing().getCoordinates()));
+                for (int h = 0; h < p.getNumInteriorRing(); h++) {
+                    rings.add(ConvexPolygon.ring(p.getInteriorRingN(h).getCoordinates()));
                 }
-                out.add(any ? c.withOpenEdges(open) : c);
             }
-            return out;
+            for (ConvexPolygon r : rings) {
+                vertices += r.size();
+            }
+            return vertices < rawVertices ? rings : null;
         } catch (RuntimeException e) {
             return null;
         }
     }
 
-    /** Cache of part-against-part no-fit polygons, safe to share between threads (values are immutable). */
+    /** This no-fit polygon turned counter-clockwise by {@code deg} about the origin. */
+    Nfp rotated(double deg) {
+        List<ConvexPolygon> p = Orientation.transform(List.of(parts), deg, false);
+        List<ConvexPolygon> o = outline == parts ? null : Orientation.transformRings(List.of(outline), deg);
+        List<ConvexPolygon> k = Orientation.transform(List.of(pockets), deg, false);
+        return new Nfp(p, o, k);
+    }
+
+    /**
+     * Cache of part-against-part no-fit polygons, safe to share between threads (values are immutable). Uses
+     * NFP(R A, R B) = R NFP(A, B): a pair is computed with the fixed part unturned and then rotated, when the
+     * needed relative angle is one of the allowed ones.
+     */
     static final class Cache {
         private final ConcurrentHashMap<Long, Nfp> map = new ConcurrentHashMap<>();
         private final List<Orientation> orientations;
+        private final java.util.Map<String, Integer> byKey = new java.util.HashMap<>();
 
         Cache(List<Orientation> orientations) {
             this.orientations = orientations;
+            for (Orientation o : orientations) {
+                byKey.put(key(o.type, o.angleDeg, o.mirrored), o.id);
+            }
+        }
+
+        private static String key(int type, double deg, boolean mirrored) {
+            long milli = Math.round(dev.sheetwright.nest.model.RotationRule.normalize(deg) * 1e6) % 360_000_000L;
+            return type + ":" + milli + ":" + mirrored;
         }
 
         Nfp get(int fixedId, int movingId) {
-            long key = ((long) fixedId << 32) | movingId;
-            Nfp n = map.get(key);
-            if (n == null) {
-                n = of(orientations.get(fixedId), orientations.get(movingId));
-                Nfp prev = map.putIfAbsent(key, n);
-                if (prev != null) {
-                    n = prev;
-                }
+            long k = ((long) fixedId << 32) | movingId;
+            Nfp n = map.get(k);
+            if (n != null) {
+                return n;
             }
-            return n;
+            Orientation f = orientations.get(fixedId);
+            Orientation m = orientations.get(movingId);
+            Integer baseF = f.angleDeg == 0 ? null : byKey.get(key(f.type, 0, f.mirrored));
+            Integer baseM = baseF == null ? null : byKey.get(key(m.type, m.angleDeg - f.angleDeg, m.mirrored));
+            if (baseF != null && baseM != null) {
+                n = get(baseF, baseM).rotated(f.angleDeg);
+            } else {
+                n = of(f, m);
+            }
+            Nfp prev = map.putIfAbsent(k, n);
+            return prev != null ? prev : n;
         }
     }
 }

@@ -56,6 +56,33 @@ final class Orientation {
         return r;
     }
 
+    /** Rotates candidate-only rings (kept as given, not re-hulled). */
+    static List<ConvexPolygon> transformRings(List<ConvexPolygon> rings, double deg) {
+        double[] sc = sinCos(deg);
+        java.util.ArrayList<ConvexPolygon> out = new java.util.ArrayList<>();
+        for (ConvexPolygon p : rings) {
+            int n = p.size();
+            double[] xs = new double[n];
+            double[] ys = new double[n];
+            for (int i = 0; i < n; i++) {
+                xs[i] = p.xs[i] * sc[1] - p.ys[i] * sc[0];
+                ys[i] = p.xs[i] * sc[0] + p.ys[i] * sc[1];
+            }
+            out.add(ConvexPolygon.ring(xs, ys));
+        }
+        return out;
+    }
+
+    /** {sin, cos} of deg, exact for multiples of 90. */
+    static double[] sinCos(double deg) {
+        double q = deg / 90.0;
+        if (q == Math.rint(q)) {
+            int k = ((int) q % 4 + 4) % 4;
+            return new double[] {new double[] {0, 1, 0, -1}[k], new double[] {1, 0, -1, 0}[k]};
+        }
+        return new double[] {Math.sin(Math.toRadians(deg)), Math.cos(Math.toRadians(deg))};
+    }
+
     /** Rotates (after an optional mirror x to -x) each convex piece; mirrored rings are re-hulled counter-clockwise. */
     static List<ConvexPolygon> transform(List<ConvexPolygon> parts, double deg, boolean mirror) {
         double rad = Math.toRadians(deg);
