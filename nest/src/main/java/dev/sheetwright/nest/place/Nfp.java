@@ -93,7 +93,7 @@ final class Nfp {
                 pockets.add(p);
             }
         }
-        return new Nfp(List.of(base.parts), List.of(base.outline), pockets);
+        return new Nfp(List.of(base.parts), base.outline == base.parts ? null : List.of(base.outline), pockets);
     }
 
     private static double support(ConvexPolygon[] parts, double ux, double uy) {
