@@ -60,6 +60,11 @@ public record StripInstance(String name, double stripHeight, List<Double> allowe
     }
 
     static StripInstance fromJson(JsonNode root) {
+        for (String field : new String[] {"name", "stripHeight", "items"}) {
+            if (root == null || !root.hasNonNull(field)) {
+                throw new IllegalArgumentException("strip instance must have the field '" + field + "'; this file has not");
+            }
+        }
         List<Double> rot = null;
         JsonNode r = root.get("allowedRotationsDeg");
         if (r != null && !r.isNull()) {

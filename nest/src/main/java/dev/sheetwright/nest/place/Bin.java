@@ -104,9 +104,31 @@ final class Bin {
                     continue;
                 }
             }
+            boolean union = nfp.outline != nfp.parts;
+            int group = nfp.pockets.length == 0 ? -1 : s.addGroup(nfp.pockets, px, py);
             for (ConvexPolygon c : nfp.parts) {
                 if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
                     s.addPiece(c, px, py);
+                    s.distinct[s.np - 1] = union;
+                    s.owner[s.np - 1] = group;
+                }
+            }
+            for (ConvexPolygon c : nfp.pockets) {
+                if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
+                    s.addEdgePiece(c, px, py);
+                }
+            }
+            if (union) {
+                for (ConvexPolygon c : nfp.outline) {
+                    if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
+                        s.addEdgePiece(c, px, py);
+                    }
+                }
+            } else {
+                for (ConvexPolygon c : nfp.parts) {
+                    if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
+                        s.addEdgePiece(c, px, py);
+                    }
                 }
             }
         }
@@ -114,16 +136,18 @@ final class Bin {
             for (ConvexPolygon c : slot.obstacleNfp(o).parts) {
                 if (c.minX < ix1 + eps && c.maxX > ix0 - eps && c.minY < iy1 + eps && c.maxY > iy0 - eps) {
                     s.addPiece(c, 0, 0);
+                    s.addEdgePiece(c, 0, 0);
                 }
             }
         }
-        s.buildGrid(ix0, iy0, ix1, iy1);
+        s.buildGrid(ix0, iy0, ix1, iy1, eps);
         s.clearCandidates();
         s.addCandidate(ix0, iy0);
         s.addCandidate(ix1, iy0);
         s.addCandidate(ix0, iy1);
         s.addCandidate(ix1, iy1);
         s.collectVerticesAndBorderHits(ix0, iy0, ix1, iy1, eps);
+        s.collectTestVertices(ix0, iy0, ix1, iy1, eps, s.distinct);
         s.collectIntersections(ix0, iy0, ix1, iy1, eps);
         int best = s.firstFeasible(alongX, eps);
         if (best < 0) {

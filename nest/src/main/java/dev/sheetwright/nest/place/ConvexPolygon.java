@@ -17,8 +17,18 @@ final class ConvexPolygon {
     final double minY;
     final double maxX;
     final double maxY;
+    /**
+     * Edges that lie inside a larger region this polygon is one piece of (null: none). A point on such an edge is
+     * still inside the region, so those edges count as interior in {@link #containsStrictly}.
+     */
+    final boolean[] open;
 
     private ConvexPolygon(double[] xs, double[] ys) {
+        this(xs, ys, null);
+    }
+
+    private ConvexPolygon(double[] xs, double[] ys, boolean[] open) {
+        this.open = open;
         this.xs = xs;
         this.ys = ys;
         int n = xs.length;
@@ -56,15 +66,35 @@ final class ConvexPolygon {
     boolean containsStrictly(double px, double py, double tx, double ty, double eps) {
         double x = px - tx;
         double y = py - ty;
-        if (x <= minX + eps || x >= maxX - eps || y <= minY + eps || y >= maxY - eps) {
+        if (open == null && (x <= minX + eps || x >= maxX - eps || y <= minY + eps || y >= maxY - eps)) {
             return false;
         }
-        for (int i = 0; i < nx.length; i++) {
-            if (nx[i] * x + ny[i] * y - c[i] > -eps) {
-                return false;
+        if (x < minX - eps || x > maxX + eps || y < minY - eps || y > maxY + eps) {
+            return false;
+        }
+        if (open == null) {
+            for (int i = 0; i < nx.length; i++) {
+                if (nx[i] * x + ny[i] * y - c[i] > -eps) {
+                    return false;
+                }
+            }
+        } else {
+            for (int i = 0; i < nx.length; i++) {
+                if (nx[i] * x + ny[i] * y - c[i] > (open[i] ? eps : -eps)) {
+                    return false;
+                }
             }
         }
         return true;
+    }
+
+    /** Same polygon with edges marked open (interior to the region it is a piece of). */
+    ConvexPolygon withOpenEdges(boolean[] openEdges) {
+        return new ConvexPolygon(xs, ys, openEdges.clone());
+    }
+
+    boolean isOpen(int edge) {
+        return open != null && open[edge];
     }
 
     double area() {
@@ -135,6 +165,81 @@ final class ConvexPolygon {
             }
         }
         return hull(px, py, n);
+    }
+
+    /** Largest value of n . v over the vertices. */
+    double support(double ux, double uy) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < xs.length; i++) {
+            m = Math.max(m, ux * xs[i] + uy * ys[i]);
+        }
+        return m;
+    }
+
+    /**
+     * The convex polygon {p : a_i . p <= b_i for all i} clipped to the box, or null if it has no area.
+     * Sutherland-Hodgman clipping of the box by each half-plane.
+     */
+    static ConvexPolygon fromHalfPlanes(double[] ax, double[] ay, double[] b, double x0, double y0, double x1, double y1) {
+        double[] px = {x0, x1, x1, x0};
+        double[] py = {y0, y0, y1, y1};
+        int n = 4;
+        for (int h = 0; h < b.length && n >= 3; h++) {
+            double[] qx = new double[n + 1];
+            double[] qy = new double[n + 1];
+            int m = 0;
+            for (int i = 0; i < n; i++) {
+                int j = (i + 1) % n;
+                double di = ax[h] * px[i] + ay[h] * py[i] - b[h];
+                double dj = ax[h] * px[j] + ay[h] * py[j] - b[h];
+                if (di <= 0) {
+                    qx[m] = px[i];
+                    qy[m] = py[i];
+                    m++;
+                }
+                if ((di < 0 && dj > 0) || (di > 0 && dj < 0)) {
+                    double t = di / (di - dj);
+                    qx[m] = px[i] + t * (px[j] - px[i]);
+                    qy[m] = py[i] + t * (py[j] - py[i]);
+                    m++;
+                }
+            }
+            px = qx;
+            py = qy;
+            n = m;
+        }
+        return n < 3 ? null : hull(px, py, n);
+    }
+
+    /** Whether (px, py) - (tx, ty) lies inside or on this polygon, within eps. */
+    boolean containsClosed(double px, double py, double tx, double ty, double eps) {
+        double x = px - tx;
+        double y = py - ty;
+        for (int i = 0; i < nx.length; i++) {
+            if (nx[i] * x + ny[i] * y - c[i] > eps) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * A closed ring kept exactly as given (not necessarily convex): only its edges and vertices are used, as a
+     * source of candidate positions.
+     */
+    static ConvexPolygon ring(org.locationtech.jts.geom.Coordinate[] closed) {
+        int n = closed.length - 1;
+        double[] xs = new double[n];
+        double[] ys = new double[n];
+        for (int i = 0; i < n; i++) {
+            xs[i] = closed[i].x;
+            ys[i] = closed[i].y;
+        }
+        return new ConvexPolygon(xs, ys);
+    }
+
+    static ConvexPolygon ring(double[] xs, double[] ys) {
+        return new ConvexPolygon(xs, ys);
     }
 
     static ConvexPolygon of(double[] xs, double[] ys) {

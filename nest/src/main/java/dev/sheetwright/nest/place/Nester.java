@@ -168,6 +168,12 @@ public final class Nester {
             for (int attempt = 0; attempt < 8; attempt++) {
                 int i = rnd.nextInt(n);
                 int j = rnd.nextInt(n);
+                if (rnd.nextBoolean()) {
+                    // half of the moves stay near the end of the order: cheap to re-place, and they decide the length
+                    int tail = Math.max(2, n / 4);
+                    i = n - 1 - rnd.nextInt(tail);
+                    j = n - 1 - rnd.nextInt(tail);
+                }
                 if (i == j || pb.instType[a[i]] == pb.instType[a[j]]) {
                     continue;
                 }

@@ -13,6 +13,8 @@ final class Orientation {
     final boolean mirrored;
     final ConvexPolygon[] spacing;
     final ConvexPolygon[] body;
+    /** Convex pieces of the holes of the spacing shape: pockets where other parts may sit. */
+    final ConvexPolygon[] holes;
     final double sMinX;
     final double sMinY;
     final double sMaxX;
@@ -22,7 +24,9 @@ final class Orientation {
     final double bMaxX;
     final double bMaxY;
 
-    Orientation(int id, int type, double angleDeg, boolean mirrored, List<ConvexPolygon> spacing, List<ConvexPolygon> body) {
+    Orientation(int id, int type, double angleDeg, boolean mirrored, List<ConvexPolygon> spacing, List<ConvexPolygon> body,
+                List<ConvexPolygon> holes) {
+        this.holes = holes.toArray(new ConvexPolygon[0]);
         this.id = id;
         this.type = type;
         this.angleDeg = angleDeg;
@@ -50,6 +54,33 @@ final class Orientation {
             r[3] = Math.max(r[3], p.maxY);
         }
         return r;
+    }
+
+    /** Rotates candidate-only rings (kept as given, not re-hulled). */
+    static List<ConvexPolygon> transformRings(List<ConvexPolygon> rings, double deg) {
+        double[] sc = sinCos(deg);
+        java.util.ArrayList<ConvexPolygon> out = new java.util.ArrayList<>();
+        for (ConvexPolygon p : rings) {
+            int n = p.size();
+            double[] xs = new double[n];
+            double[] ys = new double[n];
+            for (int i = 0; i < n; i++) {
+                xs[i] = p.xs[i] * sc[1] - p.ys[i] * sc[0];
+                ys[i] = p.xs[i] * sc[0] + p.ys[i] * sc[1];
+            }
+            out.add(ConvexPolygon.ring(xs, ys));
+        }
+        return out;
+    }
+
+    /** {sin, cos} of deg, exact for multiples of 90. */
+    static double[] sinCos(double deg) {
+        double q = deg / 90.0;
+        if (q == Math.rint(q)) {
+            int k = ((int) q % 4 + 4) % 4;
+            return new double[] {new double[] {0, 1, 0, -1}[k], new double[] {1, 0, -1, 0}[k]};
+        }
+        return new double[] {Math.sin(Math.toRadians(deg)), Math.cos(Math.toRadians(deg))};
     }
 
     /** Rotates (after an optional mirror x to -x) each convex piece; mirrored rings are re-hulled counter-clockwise. */

@@ -61,14 +61,17 @@ final class Problem {
         for (int t = 0; t < types.size(); t++) {
             Polygon shape = types.get(t).shape();
             typeArea[t] = shape.getArea();
-            List<ConvexPolygon> spacing = ConvexDecomposer.decompose(inflate(shape, rules.gap() / 2 + rules.chordTolerance()));
+            Geometry spacingShape = inflate(shape, rules.gap() / 2 + rules.chordTolerance());
+            List<ConvexPolygon> spacing = ConvexDecomposer.decompose(shells(spacingShape));
+            List<ConvexPolygon> holes = holes(spacingShape);
             List<ConvexPolygon> body = rules.gap() == 0 ? spacing
-                    : ConvexDecomposer.decompose(inflate(shape, rules.chordTolerance()));
+                    : ConvexDecomposer.decompose(shells(inflate(shape, rules.chordTolerance())));
             List<Orientation> list = new ArrayList<>();
             for (int m = 0; m < (rules.mirror() ? 2 : 1); m++) {
                 for (double a : angles) {
                     Orientation o = new Orientation(orientations.size(), t, a, m == 1,
-                            Orientation.transform(spacing, a, m == 1), Orientation.transform(body, a, m == 1));
+                            Orientation.transform(spacing, a, m == 1), Orientation.transform(body, a, m == 1),
+                            Orientation.transform(holes, a, m == 1));
                     orientations.add(o);
                     list.add(o);
                 }
@@ -92,6 +95,31 @@ final class Problem {
         for (int t = 0; t < types.size(); t++) {
             tooLarge[t] = fitsSomewhere(t) ? null : tooLargeReason(t, rules.margin());
         }
+    }
+
+    /** The outer rings only (holes filled). */
+    static Geometry shells(Geometry g) {
+        List<Polygon> out = new ArrayList<>();
+        for (int i = 0; i < g.getNumGeometries(); i++) {
+            Polygon p = (Polygon) g.getGeometryN(i);
+            out.add(g.getFactory().createPolygon(p.getExteriorRing().getCoordinates()));
+        }
+        return g.getFactory().createMultiPolygon(out.toArray(new Polygon[0]));
+    }
+
+    /** The holes as convex pieces (a non-convex hole is split; each piece alone is a pocket other parts may use). */
+    static List<ConvexPolygon> holes(Geometry g) {
+        List<Polygon> out = new ArrayList<>();
+        for (int i = 0; i < g.getNumGeometries(); i++) {
+            Polygon p = (Polygon) g.getGeometryN(i);
+            for (int h = 0; h < p.getNumInteriorRing(); h++) {
+                out.add(g.getFactory().createPolygon(p.getInteriorRingN(h).getCoordinates()));
+            }
+        }
+        if (out.isEmpty()) {
+            return List.of();
+        }
+        return ConvexDecomposer.decompose(g.getFactory().createMultiPolygon(out.toArray(new Polygon[0])));
     }
 
     private static double stockScale(Stock s) {

@@ -7,10 +7,27 @@ import java.util.Arrays;
  * the inner-fit rectangle, and the candidate points.
  */
 final class Scratch {
+    /** Grid cells per side at most, and cells per bounding edge: tuned on the strip benchmarks. */
+    private static final int GRID_MAX = 128;
+    private static final double GRID_DENSITY = 1.0;
     ConvexPolygon[] pc = new ConvexPolygon[256];
     double[] ptx = new double[256];
     double[] pty = new double[256];
     int np;
+    boolean[] distinct = new boolean[256];
+    /** owner[k]: pocket group of test piece k, or -1. */
+    int[] owner = new int[256];
+    ConvexPolygon[] pockets = new ConvexPolygon[16];
+    double[] pocketX = new double[16];
+    double[] pocketY = new double[16];
+    int npk;
+    /** Pockets of group g are pockets[groupStart[g] .. groupStart[g + 1]). */
+    int[] groupStart = new int[17];
+    int groups;
+    ConvexPolygon[] ec = new ConvexPolygon[256];
+    double[] etx = new double[256];
+    double[] ety = new double[256];
+    int ne;
 
     double[] cx = new double[1024];
     double[] cy = new double[1024];
@@ -31,6 +48,64 @@ final class Scratch {
 
     void clearPieces() {
         np = 0;
+        ne = 0;
+        npk = 0;
+        groups = 0;
+        groupStart[0] = 0;
+    }
+
+    /** Starts a pocket group (the pockets of one no-fit polygon); returns its index. */
+    int addGroup(ConvexPolygon[] ps, double x, double y) {
+        for (ConvexPolygon c : ps) {
+            if (npk == pockets.length) {
+                pockets = Arrays.copyOf(pockets, npk * 2);
+                pocketX = Arrays.copyOf(pocketX, npk * 2);
+                pocketY = Arrays.copyOf(pocketY, npk * 2);
+            }
+            pockets[npk] = c;
+            pocketX[npk] = x;
+            pocketY[npk] = y;
+            npk++;
+        }
+        if (groups + 2 > groupStart.length) {
+            groupStart = Arrays.copyOf(groupStart, groupStart.length * 2);
+        }
+        groups++;
+        groupStart[groups] = npk;
+        return groups - 1;
+    }
+
+    private boolean inPocket(int group, double x, double y, double eps) {
+        for (int q = groupStart[group]; q < groupStart[group + 1]; q++) {
+            if (pockets[q].containsClosed(x, y, pocketX[q], pocketY[q], eps)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private boolean pocketTouches(int group, double lx, double ly, double hx, double hy) {
+        for (int q = groupStart[group]; q < groupStart[group + 1]; q++) {
+            ConvexPolygon c = pockets[q];
+            if (c.minX + pocketX[q] <= hx && c.maxX + pocketX[q] >= lx && c.minY + pocketY[q] <= hy && c.maxY + pocketY[q] >= ly) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** A piece whose edges (all but the open ones) bound the region: source of candidate positions. */
+    void addEdgePiece(ConvexPolygon c, double x, double y) {
+        if (ne == ec.length) {
+            int n = ne * 2;
+            ec = Arrays.copyOf(ec, n);
+            etx = Arrays.copyOf(etx, n);
+            ety = Arrays.copyOf(ety, n);
+        }
+        ec[ne] = c;
+        etx[ne] = x;
+        ety[ne] = y;
+        ne++;
     }
 
     void addPiece(ConvexPolygon c, double x, double y) {
@@ -40,9 +115,15 @@ final class Scratch {
             ptx = Arrays.copyOf(ptx, n);
             pty = Arrays.copyOf(pty, n);
         }
+        if (np == distinct.length) {
+            distinct = Arrays.copyOf(distinct, np * 2);
+            owner = Arrays.copyOf(owner, np * 2);
+        }
+        owner[np] = -1;
         pc[np] = c;
         ptx[np] = x;
         pty[np] = y;
+        distinct[np] = false;
         np++;
     }
 
@@ -51,6 +132,9 @@ final class Scratch {
     }
 
     void addCandidate(double x, double y) {
+        if (isCovered(x, y)) {
+            return;
+        }
         if (nc == cx.length) {
             cx = Arrays.copyOf(cx, nc * 2);
             cy = Arrays.copyOf(cy, nc * 2);
@@ -71,12 +155,12 @@ final class Scratch {
     }
 
     /** Buckets pieces (by box) and their edges (by box) into a g x g grid over the rectangle. */
-    void buildGrid(double x0, double y0, double x1, double y1) {
+    void buildGrid(double x0, double y0, double x1, double y1, double eps) {
         int edges = 0;
-        for (int k = 0; k < np; k++) {
-            edges += pc[k].size();
+        for (int k = 0; k < ne; k++) {
+            edges += ec[k].size();
         }
-        g = (int) Math.max(1, Math.min(96, Math.sqrt(edges / 3.0)));
+        g = (int) Math.max(1, Math.min(GRID_MAX, Math.sqrt(edges * GRID_DENSITY)));
         gx0 = x0;
         gy0 = y0;
         cellW = Math.max((x1 - x0) / g, 1e-300);
@@ -119,18 +203,22 @@ final class Scratch {
                 }
             }
         }
+        markCovered(eps);
         // edges
         Arrays.fill(counts, 0, cells + 1, 0);
         for (int pass = 0; pass < 2; pass++) {
-            for (int k = 0; k < np; k++) {
-                ConvexPolygon c = pc[k];
+            for (int k = 0; k < ne; k++) {
+                ConvexPolygon c = ec[k];
                 int n = c.size();
                 for (int i = 0; i < n; i++) {
+                    if (c.isOpen(i)) {
+                        continue;
+                    }
                     int j = i + 1 == n ? 0 : i + 1;
-                    double ax = c.xs[i] + ptx[k];
-                    double ay = c.ys[i] + pty[k];
-                    double bx = c.xs[j] + ptx[k];
-                    double by = c.ys[j] + pty[k];
+                    double ax = c.xs[i] + etx[k];
+                    double ay = c.ys[i] + ety[k];
+                    double bx = c.xs[j] + etx[k];
+                    double by = c.ys[j] + ety[k];
                     if (Math.max(ax, bx) < x0 || Math.min(ax, bx) > x1 || Math.max(ay, by) < y0 || Math.min(ay, by) > y1) {
                         continue;
                     }
@@ -163,6 +251,39 @@ final class Scratch {
         }
     }
 
+    /** covered[cell]: the whole closed cell lies strictly inside one test piece, so it holds no feasible point. */
+    private boolean[] covered = new boolean[1];
+
+    private void markCovered(double eps) {
+        int cells = g * g;
+        if (covered.length < cells) {
+            covered = new boolean[cells];
+        }
+        for (int cell = 0; cell < cells; cell++) {
+            covered[cell] = false;
+            int a = cell % g;
+            int b = cell / g;
+            double lx = gx0 + a * cellW;
+            double ly = gy0 + b * cellH;
+            double hx = lx + cellW;
+            double hy = ly + cellH;
+            for (int p = pieceStart[cell], e = pieceStart[cell + 1]; p < e; p++) {
+                int k = pieceCells[p];
+                ConvexPolygon c = pc[k];
+                if (c.containsStrictly(lx, ly, ptx[k], pty[k], eps) && c.containsStrictly(hx, hy, ptx[k], pty[k], eps)
+                        && c.containsStrictly(lx, hy, ptx[k], pty[k], eps) && c.containsStrictly(hx, ly, ptx[k], pty[k], eps)
+                        && (owner[k] < 0 || !pocketTouches(owner[k], lx - eps, ly - eps, hx + eps, hy + eps))) {
+                    covered[cell] = true;
+                    break;
+                }
+            }
+        }
+    }
+
+    private boolean isCovered(double x, double y) {
+        return covered[cellY(y) * g + cellX(x)];
+    }
+
     private int prefix(int[] start, int cells) {
         int sum = 0;
         for (int c = 0; c < cells; c++) {
@@ -175,16 +296,23 @@ final class Scratch {
 
     /** Piece vertices inside the rectangle, and crossings of piece edges with the rectangle's sides. */
     void collectVerticesAndBorderHits(double x0, double y0, double x1, double y1, double eps) {
-        for (int k = 0; k < np; k++) {
-            ConvexPolygon c = pc[k];
-            double tx = ptx[k];
-            double ty = pty[k];
+        for (int k = 0; k < ne; k++) {
+            ConvexPolygon c = ec[k];
+            double tx = etx[k];
+            double ty = ety[k];
             int n = c.size();
             for (int i = 0; i < n; i++) {
                 double ax = c.xs[i] + tx;
                 double ay = c.ys[i] + ty;
+                boolean openHere = c.isOpen(i);
+                if (openHere && c.isOpen(i == 0 ? n - 1 : i - 1)) {
+                    continue;
+                }
                 if (ax >= x0 - eps && ax <= x1 + eps && ay >= y0 - eps && ay <= y1 + eps) {
                     addCandidate(clamp(ax, x0, x1), clamp(ay, y0, y1));
+                }
+                if (openHere) {
+                    continue;
                 }
                 int j = i + 1 == n ? 0 : i + 1;
                 double bx = c.xs[j] + tx;
@@ -193,6 +321,23 @@ final class Scratch {
                 vertical(ax, ay, bx, by, x1, y0, y1);
                 horizontal(ax, ay, bx, by, y0, x0, x1);
                 horizontal(ax, ay, bx, by, y1, x0, x1);
+            }
+        }
+    }
+
+    /** Vertices of the test pieces (needed where a union has hidden zero-width slits). */
+    void collectTestVertices(double x0, double y0, double x1, double y1, double eps, boolean[] distinct) {
+        for (int k = 0; k < np; k++) {
+            if (!distinct[k]) {
+                continue;
+            }
+            ConvexPolygon c = pc[k];
+            for (int i = 0; i < c.size(); i++) {
+                double ax = c.xs[i] + ptx[k];
+                double ay = c.ys[i] + pty[k];
+                if (ax >= x0 - eps && ax <= x1 + eps && ay >= y0 - eps && ay <= y1 + eps) {
+                    addCandidate(clamp(ax, x0, x1), clamp(ay, y0, y1));
+                }
             }
         }
     }
@@ -225,7 +370,7 @@ final class Scratch {
         for (int cell = 0; cell < cells; cell++) {
             int from = edgeStart[cell];
             int to = edgeStart[cell + 1];
-            if (to - from < 2) {
+            if (to - from < 2 || covered[cell]) {
                 continue;
             }
             int ca = cell % g;
@@ -242,13 +387,13 @@ final class Scratch {
             }
             for (int e = from; e < to; e++) {
                 int k1 = edgePiece[e];
-                ConvexPolygon c1 = pc[k1];
+                ConvexPolygon c1 = ec[k1];
                 int i1 = edgeIdx[e];
                 int j1 = i1 + 1 == c1.size() ? 0 : i1 + 1;
-                double ax = c1.xs[i1] + ptx[k1];
-                double ay = c1.ys[i1] + pty[k1];
-                double rx = c1.xs[j1] + ptx[k1] - ax;
-                double ry = c1.ys[j1] + pty[k1] - ay;
+                double ax = c1.xs[i1] + etx[k1];
+                double ay = c1.ys[i1] + ety[k1];
+                double rx = c1.xs[j1] + etx[k1] - ax;
+                double ry = c1.ys[j1] + ety[k1] - ay;
                 double e1x0 = Math.min(ax, ax + rx);
                 double e1x1 = Math.max(ax, ax + rx);
                 double e1y0 = Math.min(ay, ay + ry);
@@ -258,13 +403,13 @@ final class Scratch {
                     if (k2 == k1) {
                         continue;
                     }
-                    ConvexPolygon c2 = pc[k2];
+                    ConvexPolygon c2 = ec[k2];
                     int i2 = edgeIdx[f];
                     int j2 = i2 + 1 == c2.size() ? 0 : i2 + 1;
-                    double qx = c2.xs[i2] + ptx[k2];
-                    double qy = c2.ys[i2] + pty[k2];
-                    double sx = c2.xs[j2] + ptx[k2] - qx;
-                    double sy = c2.ys[j2] + pty[k2] - qy;
+                    double qx = c2.xs[i2] + etx[k2];
+                    double qy = c2.ys[i2] + ety[k2];
+                    double sx = c2.xs[j2] + etx[k2] - qx;
+                    double sy = c2.ys[j2] + ety[k2] - qy;
                     if (Math.max(qx, qx + sx) < e1x0 || Math.min(qx, qx + sx) > e1x1
                             || Math.max(qy, qy + sy) < e1y0 || Math.min(qy, qy + sy) > e1y1) {
                         continue;
@@ -295,7 +440,7 @@ final class Scratch {
         int cell = cellY(y) * g + cellX(x);
         for (int p = pieceStart[cell], e = pieceStart[cell + 1]; p < e; p++) {
             int k = pieceCells[p];
-            if (pc[k].containsStrictly(x, y, ptx[k], pty[k], eps)) {
+            if (pc[k].containsStrictly(x, y, ptx[k], pty[k], eps) && (owner[k] < 0 || !inPocket(owner[k], x, y, eps))) {
                 return false;
             }
         }

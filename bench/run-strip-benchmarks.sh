@@ -1,0 +1,110 @@
+#!/usr/bin/env bash
+# Runs every strip-packing instance of the shared benchmark folder through `bench strip` at each given time and
+# writes a Markdown table to bench/strip-results.md (or --out FILE).
+#
+# usage: bench/run-strip-benchmarks.sh [--times 10,60] [--seed N] [--dir DIR] [--jar JAR] [--only a,b] [--out FILE]
+# CI smoke: bench/run-strip-benchmarks.sh --times 2 --only fu --out /tmp/strip-smoke.md
+set -euo pipefail
+
+here="$(cd "$(dirname "$0")" && pwd)"
+root="$(dirname "$here")"
+times="10,60"
+seed=1
+dir="$root/../shared/nesting-benchmarks"
+jar="$root/cli/target/sheetwright.jar"
+only=""
+out="$here/strip-results.md"
+java="${JAVA:-/usr/bin/java}"
+
+while [ $# -gt 0 ]; do
+  case "$1" in
+    --times) times="$2"; shift 2 ;;
+    --seed) seed="$2"; shift 2 ;;
+    --dir) dir="$2"; shift 2 ;;
+    --jar) jar="$2"; shift 2 ;;
+    --only) only="$2"; shift 2 ;;
+    --out) out="$2"; shift 2 ;;
+    -h|--help) sed -n '2,6p' "$0"; exit 0 ;;
+    *) echo "unknown argument: $1" >&2; exit 2 ;;
+  esac
+done
+
+[ -r "$jar" ] || { echo "jar not found: $jar (build with: mvn -B -q -pl cli -am package -DskipTests)" >&2; exit 2; }
+[ -d "$dir" ] || { echo "benchmark folder not found: $dir" >&2; exit 2; }
+
+# Until the root command registers `bench`, fall back to BenchCommand's own entry point.
+if "$java" -jar "$jar" bench strip --help 2>/dev/null | grep -q "FILE.json"; then
+  run=("$java" -jar "$jar" bench strip)
+else
+  run=("$java" -cp "$jar" dev.sheetwright.cli.BenchCommand strip)
+fi
+
+# Best checked published density per instance: section A of $dir/README.md ("best checked published density";
+# beam search, Bennell & Song 2010, or SAHA/GLSHA, Gomes & Oliveira 2006). dagli and swim use the value recomputed
+# with this file's polygons. jakobs1/jakobs2 have none in section A.
+declare -A best=(
+  [albano]=0.8788 [dagli]=0.8774 [fu]=0.9096 [mao]=0.8101 [marques]=0.8892
+  [shapes0]=0.6650 [shirts]=0.8804 [swim]=0.7503 [trousers]=0.9038
+)
+
+IFS=',' read -r -a tlist <<< "$times"
+tmp="$(mktemp)"
+trap 'rm -f "$tmp"' EXIT
+
+for f in "$dir"/*.json; do
+  name="$(basename "$f" .json)"
+  case "$name" in anchors|published-layouts) continue ;; esac
+  if [ -n "$only" ] && [[ ",$only," != *",$name,"* ]]; then continue; fi
+  row="$name"
+  pieces=""
+  for t in "${tlist[@]}"; do
+    line="$("${run[@]}" "$f" --time "$t" --seed "$seed")"
+    echo "$line" >&2
+    pieces="$(sed -E 's/.*"pieces":([0-9]+).*/\1/' <<< "$line")"
+    dens="$(sed -E 's/.*"density":([0-9.]+).*/\1/' <<< "$line")"
+    viol="$(sed -E 's/.*"violations":([0-9]+).*/\1/' <<< "$line")"
+    row="$row|$dens|$viol"
+  done
+  echo "$pieces|$row" >> "$tmp"
+done
+
+{
+  echo "# Strip benchmark results"
+  echo
+  echo "Run $(date -u +%Y-%m-%dT%H:%MZ) on $(nproc) cores (load average at end: $(cut -d' ' -f1-3 /proc/loadavg)), seed $seed,"
+  echo "with \`${run[*]} FILE --time S\`. Density = item area / (strip height x length). 'viol.' = violations found by"
+  echo "NestChecker (0 = valid layout). Best published density: section A of the benchmark folder's README.md"
+  echo "(best checked published value per instance)."
+  echo
+  header="| instance | pieces"
+  sep="| --- | ---:"
+  for t in "${tlist[@]}"; do header="$header | density ${t}s | viol. | ratio ${t}s"; sep="$sep | ---: | ---: | ---:"; done
+  echo "$header | best published |"
+  echo "$sep | ---: |"
+  declare -A sum cnt
+  worst=()
+  while IFS='|' read -r pieces name rest; do
+    IFS='|' read -r -a vals <<< "$rest"
+    b="${best[$name]:-}"
+    line="| $name | $pieces"
+    for i in "${!tlist[@]}"; do
+      d="${vals[$((2*i))]}"; v="${vals[$((2*i+1))]}"
+      if [ -n "$b" ]; then
+        r="$(awk -v d="$d" -v b="$b" 'BEGIN{printf "%.3f", d/b}')"
+        sum[$i]="$(awk -v s="${sum[$i]:-0}" -v r="$r" 'BEGIN{print s+r}')"; cnt[$i]=$(( ${cnt[$i]:-0} + 1 ))
+        worst[$i]="$(awk -v w="${worst[$i]:-9}" -v r="$r" 'BEGIN{print (r<w)?r:w}')"
+      else
+        r="n/a"
+      fi
+      line="$line | $(awk -v d="$d" 'BEGIN{printf "%.2f %%", 100*d}') | $v | $r"
+    done
+    echo "$line | ${b:+$(awk -v b="$b" 'BEGIN{printf "%.2f %%", 100*b}')} |"
+  done < "$tmp"
+  echo
+  for i in "${!tlist[@]}"; do
+    if [ "${cnt[$i]:-0}" -gt 0 ]; then
+      echo "- ${tlist[$i]} s: mean ratio to best published $(awk -v s="${sum[$i]}" -v c="${cnt[$i]}" 'BEGIN{printf "%.3f", s/c}') over ${cnt[$i]} instances, lowest ${worst[$i]}"
+    fi
+  done
+} > "$out"
+echo "wrote $out" >&2

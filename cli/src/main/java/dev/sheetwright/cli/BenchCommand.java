@@ -1,0 +1,26 @@
+package dev.sheetwright.cli;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** Groups the benchmark subcommands; prints usage when run alone. */
+@Command(name = "bench", mixinStandardHelpOptions = true,
+        description = "Measure the engine on published benchmark instances.",
+        subcommands = {BenchStripCommand.class, CommandLine.HelpCommand.class})
+public final class BenchCommand implements Runnable {
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /**
+     * Stand-alone entry until the root command registers {@code bench}:
+     * {@code java -cp sheetwright.jar dev.sheetwright.cli.BenchCommand strip FILE.json --time 10}.
+     */
+    public static void main(String[] args) {
+        System.exit(new CommandLine(new BenchCommand()).execute(args));
+    }
+}

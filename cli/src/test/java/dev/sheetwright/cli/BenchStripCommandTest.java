@@ -1,0 +1,59 @@
+package dev.sheetwright.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import org.junit.jupiter.api.Assertions;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.Test;
+import picocli.CommandLine;
+
+/** End-to-end run of 'bench strip' on the fu instance (Fujita et al. 1993, from the shared benchmark folder). */
+class BenchStripCommandTest {
+    private static final Path FU = Path.of("/work/shared/nesting-benchmarks/fu.json");
+
+    @Test
+    void strip_fuWithIterations_printsOneValidJsonLine() throws Exception {
+        if (!Files.isReadable(FU)) {
+            if ("1".equals(System.getenv("SHEETWRIGHT_REQUIRE_EXTERNAL"))) {
+                Assertions.fail("required external file is missing: " + FU);
+            }
+            Assumptions.abort("benchmark file not present: " + FU);
+        }
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        CommandLine cl = new CommandLine(new BenchCommand());
+        cl.setOut(new PrintWriter(out));
+        cl.setErr(new PrintWriter(err));
+
+        int code = cl.execute("strip", FU.toString(), "--iterations", "10", "--seed", "3");
+
+        assertEquals(0, code, err.toString());
+        String[] lines = out.toString().strip().split("\n");
+        assertEquals(1, lines.length);
+        JsonNode json = new ObjectMapper().readTree(lines[0]);
+        assertEquals("fu", json.get("instance").asText());
+        assertEquals(12, json.get("pieces").asInt());
+        assertEquals(0, json.get("violations").asInt());
+        // fu: total item area 1083, strip height 38 (benchmark README); density = area / (height x length)
+        assertEquals(1083 / (38 * json.get("length").asDouble()), json.get("density").asDouble(), 1e-5);
+        assertTrue(json.get("density").asDouble() > 0.5 && json.get("density").asDouble() <= 1);
+    }
+
+    @Test
+    void strip_negativeTime_usageError() {
+        StringWriter err = new StringWriter();
+        CommandLine cl = new CommandLine(new BenchCommand());
+        cl.setErr(new PrintWriter(err));
+        int code = cl.execute("strip", "x.json", "--time", "-1");
+        assertEquals(2, code);
+        assertTrue(err.toString().contains("--time must be a number of seconds >= 0, got -1.0"), err.toString());
+    }
+}

@@ -1,0 +1,140 @@
+package dev.sheetwright.nest.place;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.OptionalInt;
+
+import org.junit.jupiter.api.Test;
+import org.locationtech.jts.geom.Polygon;
+
+import dev.sheetwright.nest.check.NestChecker;
+import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.NestOptions;
+import dev.sheetwright.nest.model.NestPiece;
+import dev.sheetwright.nest.model.NestRequest;
+import dev.sheetwright.nest.model.NestResult;
+import dev.sheetwright.nest.model.NestRules;
+import dev.sheetwright.nest.model.Placement;
+import dev.sheetwright.nest.model.Remnant;
+import dev.sheetwright.nest.model.RotationRule;
+import dev.sheetwright.nest.model.Sheet;
+import dev.sheetwright.nest.model.SheetLayout;
+import dev.sheetwright.nest.testing.Shapes;
+
+/** Behaviour of the nester on small hand-made jobs. Gap/margin values are test choices (common practice sizes). */
+class NesterTest {
+    private static final double EPS = 1e-9;
+    private static final NestRules TOUCH = NestRules.touching(RotationRule.none());
+
+    private static NestResult nestChecked(NestRequest req, NestOptions opt) {
+        NestResult r = Nester.nest(req, opt);
+        assertEquals(List.of(), NestChecker.check(req, r));
+        assertEquals(req.totalCopies(), r.placedCount() + r.unplaced().size());
+        return r;
+    }
+
+    @Test
+    void nest_smallPartFitsOnlyInsideRingHole_usesOneSheet() {
+        // sheet 13 x 13 holds the 12 x 12 frame; the 5 x 5 plate can only go into the 6 x 6 hole
+        Sheet sheet = new Sheet("s", 13, 13, OptionalInt.empty(), 1);
+        NestRequest req = new NestRequest(List.of(NestPiece.of("duct", "flange-ring", 1, Shapes.frame(12, 6)),
+                NestPiece.of("duct", "blank", 1, Shapes.rect(0, 0, 5, 5))), List.of(sheet),
+                new NestRules(0.25, 0, RotationRule.quarter(), false, 0.01));
+        NestResult r = nestChecked(req, NestOptions.constructiveOnly());
+        assertEquals(1, r.sheets().size());
+        assertEquals(2, r.sheets().get(0).parts().size());
+        Placement blank = r.sheets().get(0).parts().stream().filter(p -> p.piece().equals("blank")).findFirst().orElseThrow();
+        Polygon placed = blank.apply(Shapes.rect(0, 0, 5, 5));
+        assertTrue(Shapes.rect(3, 3, 9, 9).covers(placed), placed.toString());
+    }
+
+    @Test
+    void nest_combsMustInterlock_fitOnOneSheet() {
+        // two combs with 3 teeth 2 wide, gaps 2 wide, 4 deep: side by side they need 2 x 10 = 20 wide; interlocked
+        // (one turned 180 deg) they take a 10 x 8 box after shifting one tooth over
+        Polygon comb = Shapes.wkt("POLYGON ((0 0, 10 0, 10 8, 8 8, 8 4, 6 4, 6 8, 4 8, 4 4, 2 4, 2 8, 0 8, 0 0))");
+        Sheet sheet = new Sheet("s", 12, 12, OptionalInt.of(1), 1);
+        NestRequest req = new NestRequest(List.of(NestPiece.of("x", "comb", 2, comb)), List.of(sheet),
+                NestRules.touching(RotationRule.angles(0, 180)));
+        NestResult r = nestChecked(req, NestOptions.constructiveOnly());
+        assertEquals(List.of(), r.unplaced());
+        assertEquals(1, r.sheets().size());
+    }
+
+    @Test
+    void nest_pieceLargerThanEveryStock_unplacedWithReason() {
+        Sheet sheet = new Sheet("48x120", 120, 48, OptionalInt.empty(), 1);
+        NestRequest req = new NestRequest(List.of(NestPiece.of("plenum", "wrap", 1, Shapes.rect(0, 0, 130.2, 40)),
+                NestPiece.of("plenum", "cap", 1, Shapes.rect(0, 0, 10, 10))), List.of(sheet),
+                new NestRules(0, 0, RotationRule.none(), false, 0));
+        NestResult r = nestChecked(req, NestOptions.constructiveOnly());
+        assertEquals(1, r.unplaced().size());
+        assertEquals("larger than every stock (needs 130.2 x 40 with margin; largest sheet 120 x 48)", r.unplaced().get(0).reason());
+        assertEquals(1, r.placedCount());
+    }
+
+    @Test
+    void nest_sheetLimitReached_restUnplaced() {
+        Sheet sheet = new Sheet("s", 10, 10, OptionalInt.of(2), 1);
+        NestRequest req = new NestRequest(List.of(NestPiece.of("f", "p", 3, Shapes.rect(0, 0, 8, 8))), List.of(sheet), TOUCH);
+        NestResult r = nestChecked(req, NestOptions.constructiveOnly());
+        assertEquals(2, r.sheets().size());
+        assertEquals(1, r.unplaced().size());
+        assertTrue(r.unplaced().get(0).reason().startsWith("no room left"), r.unplaced().get(0).reason());
+    }
+
+    @Test
+    void nest_remnantGiven_usedBeforeSheets() {
+        Polygon lShape = Shapes.wkt("POLYGON ((0 0, 30 0, 30 10, 10 10, 10 30, 0 30, 0 0))");
+        NestRequest req = new NestRequest(List.of(NestPiece.of("f", "p", 2, Shapes.rect(0, 0, 8, 8))),
+                List.of(Sheet.unlimited("big", 100, 100, 50), new Remnant("R7", lShape, 0)),
+                new NestRules(0.5, 0.5, RotationRule.quarter(), false, 0));
+        NestResult r = nestChecked(req, NestOptions.constructiveOnly());
+        assertEquals(1, r.sheets().size());
+        assertEquals("R7", r.sheets().get(0).stock().label());
+    }
+
+    @Test
+    void nest_coil_lengthIsLastPartPlusMargin() {
+        NestRequest req = new NestRequest(List.of(NestPiece.of("f", "p", 4, Shapes.rect(0, 0, 10, 4))),
+                List.of(new Coil("c", 10, 2)), new NestRules(0, 1, RotationRule.none(), false, 0));
+        NestResult r = nestChecked(req, NestOptions.constructiveOnly());
+        // coil 10 wide, margin 1 leaves 8: two 4-high strips side by side, two deep: 1 + 10 + 10 + 1
+        SheetLayout l = r.sheets().get(0);
+        assertEquals(22, l.usedLength(), EPS);
+        assertEquals(160 / 220.0, l.utilization(), EPS);
+    }
+
+    @Test
+    void nest_lastSheetCompacted_offcutReported() {
+        Sheet sheet = new Sheet("s", 120, 48, OptionalInt.empty(), 1);
+        NestRequest req = new NestRequest(List.of(NestPiece.of("f", "p", 4, Shapes.rect(0, 0, 20, 20))), List.of(sheet),
+                new NestRules(0.5, 0.5, RotationRule.none(), false, 0));
+        NestResult r = nestChecked(req, NestOptions.constructiveOnly());
+        assertNotNull(r.sheets().get(0).offcut());
+        // 2 x 2 squares: x from 0.5 to 41; offcut from 41 + gap 0.5 to 120, full height
+        assertEquals(41.5, r.sheets().get(0).offcut().x(), 1e-9);
+        assertEquals(78.5 * 48, r.sheets().get(0).offcut().area(), 1e-6);
+    }
+
+    @Test
+    void nest_sameSeedAndIterations_sameResult() {
+        Polygon comb = Shapes.wkt("POLYGON ((0 0, 10 0, 10 8, 8 8, 8 4, 6 4, 6 8, 4 8, 4 4, 2 4, 2 8, 0 8, 0 0))");
+        NestRequest req = new NestRequest(List.of(NestPiece.of("x", "comb", 3, comb), NestPiece.of("x", "tri", 4,
+                Shapes.wkt("POLYGON ((0 0, 7 0, 0 5, 0 0))")), NestPiece.of("x", "sq", 3, Shapes.rect(0, 0, 3, 3))),
+                List.of(new Coil("c", 20, 1)), NestRules.touching(RotationRule.quarter()));
+        NestResult a = nestChecked(req, NestOptions.steps(40, 7, 2));
+        NestResult b = nestChecked(req, NestOptions.steps(40, 7, 2));
+        assertEquals(a, b);
+    }
+
+    @Test
+    void nest_nullRequest_rejected() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Nester.nest(null, NestOptions.constructiveOnly()));
+        assertEquals("request must not be null", e.getMessage());
+    }
+}
