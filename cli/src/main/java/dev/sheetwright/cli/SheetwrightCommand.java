@@ -8,7 +8,7 @@ import picocli.CommandLine.Spec;
 /** The root command: groups the subcommands and prints usage when run alone. */
 @Command(name = "sheetwright", mixinStandardHelpOptions = true, versionProvider = ManifestVersion.class,
         description = "Round duct fittings from shop ticket to flat patterns, sheet cut programs and a material quote.",
-        subcommands = {DevelopCommand.class, NestCommand.class, QuoteCommand.class, RemnantCommand.class,
+        subcommands = {DevelopCommand.class, NestCommand.class, QuoteCommand.class, RemnantCommand.class, BenchCommand.class,
             CommitCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
