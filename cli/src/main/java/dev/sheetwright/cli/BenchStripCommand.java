@@ -14,7 +14,16 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
+import dev.sheetwright.cli.output.PatternDrawings;
+import dev.sheetwright.dxf.Drawing;
+import dev.sheetwright.dxf.DxfWriter;
+import dev.sheetwright.dxf.Polyline;
+import dev.sheetwright.dxf.Shape;
+import dev.sheetwright.dxf.Vertex;
 import dev.sheetwright.nest.bench.StripInstance;
+import dev.sheetwright.nest.model.Placement;
+import java.util.ArrayList;
+import java.util.List;
 import dev.sheetwright.nest.bench.StripPacker;
 import dev.sheetwright.nest.check.NestChecker;
 import dev.sheetwright.nest.model.NestOptions;
@@ -77,12 +86,30 @@ public final class BenchStripCommand implements Callable<Integer> {
     }
 
     /**
-     * Writes the layout as DXF: each placed item a closed contour on layer CUT, the strip outline (0..length x
-     * 0..height) on layer SHEET. To be wired to the dxf module's writer.
+     * Writes the layout as DXF so anyone can verify it independently: each placed item a closed contour on layer
+     * CUT, the strip outline (0..length x 0..height) on layer SHEET. Benchmark data have no unit; the file says mm.
      */
     void writeDxf(StripPacker.StripResult result, Path out) {
-        throw new CommandLine.ExecutionException(spec.commandLine(),
-                "--dxf is not available yet: the DXF writer is not wired into 'bench strip' (layout not written to " + out + ")");
+        StripInstance instance = result.instance();
+        Map<String, org.locationtech.jts.geom.Polygon> shapes = new LinkedHashMap<>();
+        for (StripInstance.Item item : instance.items()) {
+            shapes.put(StripInstance.pieceName(item.id()), item.polygon());
+        }
+        List<Shape> drawn = new ArrayList<>();
+        double h = instance.stripHeight();
+        double l = result.length();
+        drawn.add(new Polyline(PatternDrawings.SHEET, List.of(Vertex.of(0, 0), Vertex.of(l, 0), Vertex.of(l, h),
+                Vertex.of(0, h)), true));
+        for (Placement p : result.placements()) {
+            org.locationtech.jts.geom.Coordinate[] cs = p.apply(shapes.get(p.piece())).getExteriorRing()
+                    .getCoordinates();
+            List<Vertex> vs = new ArrayList<>();
+            for (int i = 0; i < cs.length - 1; i++) {
+                vs.add(Vertex.of(cs[i].x, cs[i].y));
+            }
+            drawn.add(new Polyline(PatternDrawings.CUT, vs, true));
+        }
+        DxfWriter.write(Drawing.of("mm", PatternDrawings.LAYERS, drawn), out);
     }
 
     private static double round(double v, int digits) {

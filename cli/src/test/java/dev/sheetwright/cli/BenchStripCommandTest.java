@@ -14,10 +14,14 @@ import org.junit.jupiter.api.Assertions;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import picocli.CommandLine;
+import dev.sheetwright.dxf.DxfCheck;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.io.TempDir;
 
 /** End-to-end run of 'bench strip' on the fu instance (Fujita et al. 1993, from the shared benchmark folder). */
 class BenchStripCommandTest {
-    private static final Path FU = Path.of("/work/shared/nesting-benchmarks/fu.json");
+    private static final Path FU = DxfCheck.sharedFolder().resolve("nesting-benchmarks").resolve("fu.json");
 
     @Test
     void strip_fuWithIterations_printsOneValidJsonLine() throws Exception {
@@ -45,6 +49,26 @@ class BenchStripCommandTest {
         // fu: total item area 1083, strip height 38 (benchmark README); density = area / (height x length)
         assertEquals(1083 / (38 * json.get("length").asDouble()), json.get("density").asDouble(), 1e-5);
         assertTrue(json.get("density").asDouble() > 0.5 && json.get("density").asDouble() <= 1);
+    }
+
+    @TempDir
+    Path tmp;
+
+    @Test
+    void strip_fuWithDxf_outsideReaderSeesEveryItemInsideTheStrip() throws Exception {
+        DxfCheck.requireAvailable();
+        Path dxf = tmp.resolve("fu.dxf");
+        StringWriter out = new StringWriter();
+        CommandLine cl = SheetwrightCommand.commandLine();
+        cl.setOut(new PrintWriter(out));
+        assertEquals(0, cl.execute("bench", "strip", FU.toString(), "--iterations", "5", "--dxf", dxf.toString()));
+        JsonNode json = new ObjectMapper().readTree(out.toString().strip());
+        String sheet = json.get("length").asDouble() + "x38";
+        // no gap in strip packing: parts may touch; published coordinates are exact integers here
+        DxfCheck.Result r = DxfCheck.run(List.of("--allow-touch", "--sheet", sheet, "--margin", "0"), dxf);
+        assertEquals(0, r.exitCode(), () -> r.summary() + r.stderr());
+        Map<String, Object> f = r.file(0);
+        assertEquals(12, f.get("outer_contours"));
     }
 
     @Test
