@@ -32,12 +32,7 @@ done
 [ -r "$jar" ] || { echo "jar not found: $jar (build with: mvn -B -q -pl cli -am package -DskipTests)" >&2; exit 2; }
 [ -d "$dir" ] || { echo "benchmark folder not found: $dir" >&2; exit 2; }
 
-# Until the root command registers `bench`, fall back to BenchCommand's own entry point.
-if "$java" -jar "$jar" bench strip --help 2>/dev/null | grep -q "FILE.json"; then
-  run=("$java" -jar "$jar" bench strip)
-else
-  run=("$java" -cp "$jar" dev.sheetwright.cli.BenchCommand strip)
-fi
+run=("$java" -jar "$jar" bench strip)
 
 # Best checked published density per instance: section A of $dir/README.md ("best checked published density";
 # beam search, Bennell & Song 2010, or SAHA/GLSHA, Gomes & Oliveira 2006). dagli and swim use the value recomputed
