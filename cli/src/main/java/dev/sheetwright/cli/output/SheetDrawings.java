@@ -45,11 +45,15 @@ public final class SheetDrawings {
                     unit));
         }
         if (offcut != null && offcut.width() > 0 && offcut.height() > 0) {
-            double h = Math.min(unit == LengthUnit.INCH ? 0.5 : 12, Math.min(offcut.width(), offcut.height()) / 4);
-            shapes.add(new Text(PatternDrawings.LABEL, offcut.x() + h, offcut.y() + h, h,
-                    (offcutId == null ? "" : offcutId + "  ")
-                    + String.format(Locale.ROOT, "OFFCUT %.2f x %.2f %s  %s sheet %d", offcut.width(),
-                            offcut.height(), unit.symbol(), jobName, sheet.index() + 1)));
+            String first = (offcutId == null ? "" : offcutId + "  ")
+                    + String.format(Locale.ROOT, "OFFCUT %.2f x %.2f %s", offcut.width(), offcut.height(),
+                            unit.symbol());
+            String second = String.format(Locale.ROOT, "%s sheet %d", jobName, sheet.index() + 1);
+            // as large as reads well, small enough that both lines stay inside the offcut
+            double h = Math.min(unit == LengthUnit.INCH ? 0.5 : 12, Math.min(offcut.height() / 5,
+                    offcut.width() / (0.8 * Math.max(first.length(), second.length()) + 2)));
+            shapes.add(new Text(PatternDrawings.LABEL, offcut.x() + h, offcut.y() + 2.5 * h, h, first));
+            shapes.add(new Text(PatternDrawings.LABEL, offcut.x() + h, offcut.y() + h, h, second));
         }
         return Drawing.of(unit.symbol(), PatternDrawings.LAYERS, shapes);
     }

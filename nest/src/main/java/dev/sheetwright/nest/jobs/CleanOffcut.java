@@ -67,8 +67,8 @@ public final class CleanOffcut {
     }
 
     /**
-     * The offcut of {@code layout}: the engine's rectangle if it is clean, else the largest clean rectangle found
-     * here, else empty (a coil, or no room).
+     * The offcut of {@code layout}: the larger of the engine's rectangle (when it is clean) and the largest clean
+     * rectangle found here; empty for a coil or when there is no room.
      *
      * @param tolerance how far a length may be off when checking (in the request's unit, >= 0)
      * @param allowance extra clearance beyond the gap for rectangles found here, e.g. the chord tolerance by
@@ -82,10 +82,16 @@ public final class CleanOffcut {
             return Optional.empty();
         }
         Offcut reported = layout.offcut();
-        if (reported != null && c.isClean(reported, tolerance)) {
+        Optional<Offcut> found = c.largest(request.rules().gap() + allowance, tolerance);
+        if (reported != null && c.isClean(reported, tolerance)
+                && (found.isEmpty() || area(reported) >= area(found.get()))) {
             return Optional.of(reported);
         }
-        return c.largest(request.rules().gap() + allowance, tolerance);
+        return found;
+    }
+
+    private static double area(Offcut o) {
+        return o.width() * o.height();
     }
 
     /**

@@ -47,12 +47,24 @@ class CleanOffcutTest {
     }
 
     @Test
-    void of_reportedOffcutClean_keepsIt() {
-        Offcut reported = new Offcut(30, 0, 70, 50);
+    void of_reportedOffcutCleanAndLargest_keepsIt() {
+        // the part spans x 0..20 and the gap is GAP: nothing clean is wider than 100 - 20 - GAP
+        Offcut reported = new Offcut(20 + GAP, 0, 80 - GAP, 50);
 
         Optional<Offcut> got = CleanOffcut.of(request(SHEET), layout(SHEET, reported), EPS, 0);
 
         assertEquals(Optional.of(reported), got);
+    }
+
+    @Test
+    void of_reportedOffcutCleanButSmaller_largerCleanRectangleWins() {
+        Offcut reported = new Offcut(30, 0, 70, 50);
+
+        Optional<Offcut> got = CleanOffcut.of(request(SHEET), layout(SHEET, reported), EPS, 0);
+
+        assertTrue(got.isPresent());
+        assertTrue(got.get().width() * got.get().height() > 70 * 50, got.toString());
+        assertTrue(CleanOffcut.isClean(request(SHEET), layout(SHEET, reported), got.get(), EPS));
     }
 
     @Test
