@@ -178,7 +178,7 @@ public final class NestCommand implements Callable<Integer> {
                             nest.offcut(s).width(), nest.offcut(s).height(), u));
         }
         for (Unplaced up : nest.result().unplaced()) {
-            w.printf(Locale.ROOT, "  NOT PLACED %s %s #%d: %s%n", up.fitting(), up.piece(), up.copy(), up.reason());
+            w.printf(Locale.ROOT, "  NOT PLACED %s %s #%d: %s%n", up.fitting(), up.piece(), up.copy() + 1, up.reason());
         }
         w.printf(Locale.ROOT, "Wrote %s (sheets/*.dxf, sheets/*.svg, nest.json, patterns.json)%n%s%n", out,
                 Cautions.SHORT);

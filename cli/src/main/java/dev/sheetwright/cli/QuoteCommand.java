@@ -72,7 +72,7 @@ public final class QuoteCommand implements Callable<Integer> {
         PrintWriter w = spec.commandLine().getOut();
         QuoteText.table(job.name(), q).forEach(w::println);
         nest.result().unplaced().forEach(up -> w.println("  NOT PLACED " + up.fitting() + " " + up.piece() + " #"
-                + up.copy() + ": " + up.reason() + " (the quote leaves it out)"));
+                + (up.copy() + 1) + ": " + up.reason() + " (the quote leaves it out)"));
         if (out != null) {
             w.println("Wrote " + out + " (quote.json, quote.csv, report.html, report.pdf)");
         }

@@ -65,7 +65,7 @@ public final class NestJson {
                 Map<String, Object> pe = new LinkedHashMap<>();
                 pe.put("fitting", p.fitting());
                 pe.put("piece", p.piece());
-                pe.put("copy", p.copy());
+                pe.put("copy", p.copy() + 1);
                 pe.put("x", p.x());
                 pe.put("y", p.y());
                 pe.put("rotation", p.rotationDeg());
@@ -97,7 +97,7 @@ public final class NestJson {
             Map<String, Object> ue = new LinkedHashMap<>();
             ue.put("fitting", u.fitting());
             ue.put("piece", u.piece());
-            ue.put("copy", u.copy());
+            ue.put("copy", u.copy() + 1);
             ue.put("reason", u.reason());
             unplaced.add(ue);
         }

@@ -32,7 +32,7 @@ public final class ReportDrawings {
 
     /** The label printed on a placed part, the same words as on the cut program. */
     public static String label(Placement pl) {
-        return pl.fitting() + " " + pl.piece() + " #" + pl.copy();
+        return pl.fitting() + " " + pl.piece() + " #" + (pl.copy() + 1);
     }
 
     /**

@@ -41,7 +41,7 @@ public final class SheetDrawings {
         shapes.add(stockOutline(sheet));
         for (Placement pl : sheet.parts()) {
             Pattern p = plan.pattern(pl.fitting(), pl.piece()).transformed(PatternShapes.transform(pl));
-            shapes.addAll(PatternDrawings.shapes(p, List.of(pl.fitting() + " " + pl.piece() + " #" + pl.copy()),
+            shapes.addAll(PatternDrawings.shapes(p, List.of(pl.fitting() + " " + pl.piece() + " #" + (pl.copy() + 1)),
                     unit));
         }
         if (offcut != null && offcut.width() > 0 && offcut.height() > 0) {

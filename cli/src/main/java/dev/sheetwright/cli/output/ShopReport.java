@@ -130,7 +130,7 @@ public record ShopReport(String title, List<String> facts, List<String[]> totals
         }
         List<String> unplaced = new ArrayList<>();
         for (Unplaced up : nest.result().unplaced()) {
-            unplaced.add(up.fitting() + " " + up.piece() + " #" + up.copy() + ": " + up.reason());
+            unplaced.add(up.fitting() + " " + up.piece() + " #" + (up.copy() + 1) + ": " + up.reason());
         }
 
         LayoutText text = new LayoutText(job.unit(), FractionFormat.SIXTEENTHS);
