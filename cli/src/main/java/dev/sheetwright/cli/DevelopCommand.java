@@ -1,6 +1,6 @@
 package dev.sheetwright.cli;
 
-import dev.sheetwright.cli.job.JobReader;
+import dev.sheetwright.cli.mixin.JobFileOption;
 import dev.sheetwright.cli.output.LayoutText;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.PatternDrawings;
@@ -20,9 +20,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code sheetwright develop JOB.yaml -o OUT}: flat patterns of every fitting, with hand-layout dimensions. */
@@ -34,8 +34,8 @@ public final class DevelopCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "JOB.yaml", description = "the job file")
-    Path jobFile;
+    @Mixin
+    JobFileOption jobFile;
 
     @Option(names = {"-o", "--out"}, required = true, paramLabel = "OUT", description = "output folder")
     Path out;
@@ -47,8 +47,8 @@ public final class DevelopCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         FractionFormat fractions = new FractionFormat(fraction);
-        Job job = JobReader.read(jobFile);
-        List<Development> developments = JobDevelopment.developAll(job, jobFile.toString());
+        Job job = jobFile.read();
+        List<Development> developments = JobDevelopment.developAll(job, jobFile.label());
         try (OutputFolder folder = OutputFolder.stage(out)) {
             for (Development d : developments) {
                 for (DevelopedPiece piece : d.pieces()) {

@@ -1,6 +1,6 @@
 package dev.sheetwright.cli;
 
-import dev.sheetwright.cli.job.JobReader;
+import dev.sheetwright.cli.mixin.JobFileOption;
 import dev.sheetwright.cli.output.NestJson;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.PatternDrawings;
@@ -28,7 +28,6 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code sheetwright nest JOB.yaml -o OUT}: every piece of the job nested onto stock, one cut program per sheet. */
@@ -40,8 +39,8 @@ public final class NestCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "JOB.yaml", description = "the job file")
-    Path jobFile;
+    @Mixin
+    JobFileOption jobFile;
 
     @Option(names = {"-o", "--out"}, required = true, paramLabel = "OUT", description = "output folder")
     Path out;
@@ -105,7 +104,7 @@ public final class NestCommand implements Callable<Integer> {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(),
                     "--reserve-minutes must be from 1 to 1440, got " + reserveMinutes);
         }
-        Job job = JobReader.read(jobFile);
+        Job job = jobFile.read();
         MinOffcut defaults = MinOffcut.defaults(job.unit());
         MinOffcut min = new MinOffcut(minOffcutWidth != null ? minOffcutWidth : defaults.width(),
                 minOffcutArea != null ? minOffcutArea : defaults.area());
@@ -120,7 +119,7 @@ public final class NestCommand implements Callable<Integer> {
         try (RackPlanning rack = planned
                 ? RackPlanning.open(inventory.file(), job, Duration.ofMinutes(reserveMinutes)) : null) {
             List<StockRemnant> fromRack = rack == null ? List.of() : rack.reserve(useRemnants, remnantIds);
-            JobNest nest = JobNest.run(job, jobFile.toString(), options, fromRack);
+            JobNest nest = JobNest.run(job, jobFile.label(), options, fromRack);
             progress.done();
             RackPlan plan = rack == null ? null : rack.settle(nest, min);
             Quote quote;
@@ -157,7 +156,7 @@ public final class NestCommand implements Callable<Integer> {
             }
             PatternsJson.write(doc, folder.file("nest.json"));
             PatternsJson.write(PatternsJson.document(job, nest.developments()), folder.file("patterns.json"));
-            Quote quote = QuoteFiles.write(folder, nest, jobFile, shop.settings());
+            Quote quote = QuoteFiles.write(folder, nest, jobFile.path(), shop.settings());
             folder.commit();
             return quote;
         }

@@ -1,6 +1,6 @@
 package dev.sheetwright.cli;
 
-import dev.sheetwright.cli.job.JobReader;
+import dev.sheetwright.cli.mixin.JobFileOption;
 import dev.sheetwright.cli.mixin.ShopOption;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.QuoteText;
@@ -18,7 +18,6 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code sheetwright quote JOB.yaml}: a quick nest, then the material and cutting quote as a table. */
@@ -31,8 +30,8 @@ public final class QuoteCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "JOB.yaml", description = "the job file")
-    Path jobFile;
+    @Mixin
+    JobFileOption jobFile;
 
     @Option(names = {"-o", "--out"}, paramLabel = "OUT", description = "also write the quote files and report here")
     Path out;
@@ -52,22 +51,22 @@ public final class QuoteCommand implements Callable<Integer> {
         if (!(seconds >= 0) || seconds > 86400) {
             throw new ParameterException(spec.commandLine(), "--time must be from 0 to 86400 seconds, got " + seconds);
         }
-        Job job = JobReader.read(jobFile);
+        Job job = jobFile.read();
         ShopSettings settings = shop.settings();
         PrintWriter err = spec.commandLine().getErr();
         Progress progress = Progress.forTerminal(err, seconds);
         NestOptions options = new NestOptions(Duration.ofMillis((long) (seconds * 1000)), OptionalLong.empty(), seed, 2,
                 progress);
-        JobNest nest = JobNest.run(job, jobFile.toString(), options);
+        JobNest nest = JobNest.run(job, jobFile.label(), options);
         progress.done();
         Quote q;
         if (out != null) {
             try (OutputFolder folder = OutputFolder.stage(out)) {
-                q = QuoteFiles.write(folder, nest, jobFile, settings);
+                q = QuoteFiles.write(folder, nest, jobFile.path(), settings);
                 folder.commit();
             }
         } else {
-            q = QuoteFiles.quote(nest, jobFile, settings);
+            q = QuoteFiles.quote(nest, jobFile.path(), settings);
         }
         PrintWriter w = spec.commandLine().getOut();
         QuoteText.table(job.name(), q).forEach(w::println);

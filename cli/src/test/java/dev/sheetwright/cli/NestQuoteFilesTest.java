@@ -132,7 +132,7 @@ class NestQuoteFilesTest {
         assertEquals(sheets(), Integer.parseInt(total.get("count")));
         assertEquals(quote.get("totals").get("stockWeight").asDouble(), Double.parseDouble(total.get("weight (lb)")),
                 0.005);
-        assertEquals(quote.get("totals").get("materialCost").asDouble(), Double.parseDouble(total.get("cost (money)")),
+        assertEquals(quote.get("totals").get("materialCost").asDouble(), Double.parseDouble(total.get("cost (" + quote.get("currency").asText() + ")")),
                 0.005);
         CSVRecord first = rows.get(0);
         assertEquals("48x120", first.get("name"));
