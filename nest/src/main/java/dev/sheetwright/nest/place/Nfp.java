@@ -184,11 +184,50 @@ final class Nfp {
         private final List<Orientation> orientations;
         private final java.util.Map<String, Integer> byKey = new java.util.HashMap<>();
 
+        /** canon[id]: the same orientation of the lowest type with the same outline (they share no-fit polygons). */
+        private final int[] canon;
+        private final ConcurrentHashMap<Long, Nfp> boxes = new ConcurrentHashMap<>();
+
         Cache(List<Orientation> orientations) {
+            this(orientations, null);
+        }
+
+        Cache(List<Orientation> orientations, int[] canonicalType) {
             this.orientations = orientations;
             for (Orientation o : orientations) {
                 byKey.put(key(o.type, o.angleDeg, o.mirrored), o.id);
             }
+            canon = new int[orientations.size()];
+            for (Orientation o : orientations) {
+                Integer c = canonicalType == null ? null : byKey.get(key(canonicalType[o.type], o.angleDeg, o.mirrored));
+                canon[o.id] = c == null ? o.id : c;
+            }
+        }
+
+        /**
+         * The exact no-fit polygon when it is already known, else (when {@code cheap}) the no-fit polygon of the two
+         * spacing bounding boxes, which contains the exact one: a position outside it is feasible too.
+         */
+        Nfp get(int fixedId, int movingId, boolean cheap) {
+            if (!cheap) {
+                return get(fixedId, movingId);
+            }
+            long k = ((long) canon[fixedId] << 32) | canon[movingId];
+            Nfp n = map.get(k);
+            if (n != null) {
+                return n;
+            }
+            n = boxes.get(k);
+            if (n == null) {
+                Orientation f = orientations.get(canon[fixedId]);
+                Orientation m = orientations.get(canon[movingId]);
+                double[] xs = {f.sMinX - m.sMaxX, f.sMaxX - m.sMinX, f.sMaxX - m.sMinX, f.sMinX - m.sMaxX};
+                double[] ys = {f.sMinY - m.sMaxY, f.sMinY - m.sMaxY, f.sMaxY - m.sMinY, f.sMaxY - m.sMinY};
+                ConvexPolygon box = ConvexPolygon.of(xs, ys);
+                n = new Nfp(box == null ? List.of() : List.of(box));
+                boxes.putIfAbsent(k, n);
+            }
+            return n;
         }
 
         private static String key(int type, double deg, boolean mirrored) {
@@ -197,6 +236,8 @@ final class Nfp {
         }
 
         Nfp get(int fixedId, int movingId) {
+            fixedId = canon[fixedId];
+            movingId = canon[movingId];
             long k = ((long) fixedId << 32) | movingId;
             Nfp n = map.get(k);
             if (n != null) {
