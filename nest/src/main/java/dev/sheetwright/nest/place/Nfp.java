@@ -123,8 +123,9 @@ final class Nfp {
     /**
      * The boundary of the union of the sums, for candidate generation only: each sum's edges with the parts lying
      * strictly inside another sum cut away, kept per sum as one chain whose connecting edges are marked open (they
-     * give no candidates). Edges two sums share inside the union are kept too (harmless extra candidates). Null
-     * when that leaves no fewer edges than the sums themselves have.
+     * give no candidates). An edge shared with a sum on its other side is inside the union and cut away as well
+     * (positions there could pass the test against the sums while overlapping); collinear overlapping outer edges
+     * are all kept. Null when that leaves no fewer edges than the sums themselves have.
      */
     static List<ConvexPolygon> unionBoundary(List<ConvexPolygon> parts) {
         int rawEdges = 0;
@@ -171,6 +172,11 @@ final class Nfp {
                     for (int e = 0; e < b.size() && lo < hi; e++) {
                         double d0 = b.nx[e] * ax + b.ny[e] * ay - b.c[e] + eps;
                         double dd = b.nx[e] * (bx - ax) + b.ny[e] * (by - ay);
+                        if (b.nx[e] * a.nx[i] + b.ny[e] * a.ny[i] < -1 + 1e-9 && Math.abs(d0 - eps) <= eps
+                                && Math.abs(d0 - eps + dd) <= eps) {
+                            // q's edge on the same line, q on the other side: the shared part is inside the union
+                            continue;
+                        }
                         if (dd == 0) {
                             if (d0 >= 0) {
                                 hi = lo;

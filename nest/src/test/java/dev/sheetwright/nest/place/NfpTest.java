@@ -66,4 +66,24 @@ class NfpTest {
         assertNotNull(chains);
         assertEquals(40, closedLength(chains), 1e-9);
     }
+
+    @Test
+    void unionBoundary_squaresSideBySide_sharedEdgesCutAway() {
+        // 20 unit squares touching along their sides: the union is [0, 20] x [0, 1], its inner sides are no boundary
+        List<ConvexPolygon> parts = new ArrayList<>();
+        for (int i = 0; i < 20; i++) {
+            parts.add(square(i, 0, 1));
+        }
+        List<ConvexPolygon> chains = Nfp.unionBoundary(parts);
+        assertNotNull(chains);
+        assertEquals(2 * 20 + 2, closedLength(chains), 1e-9);
+        for (ConvexPolygon c : chains) {
+            for (int i = 0; i < c.size(); i++) {
+                int j = (i + 1) % c.size();
+                if (!c.isOpen(i) && c.xs[i] == c.xs[j]) {
+                    assertTrue(c.xs[i] == 0 || c.xs[i] == 20, "inner side kept at x = " + c.xs[i]);
+                }
+            }
+        }
+    }
 }
