@@ -76,6 +76,15 @@ final class Bin {
      * if there is none. Writes into {@code out}.
      */
     boolean bottomLeft(Orientation o, Nfp.Cache cache, double eps, Scratch s, Position out) {
+        return bottomLeft(o, cache, eps, s, out, false);
+    }
+
+    /**
+     * As {@link #bottomLeft(Orientation, Nfp.Cache, double, Scratch, Position)}; when {@code cheap}, pairs whose
+     * exact no-fit polygon is not yet known use the (containing) no-fit polygon of their bounding boxes instead, so
+     * the position is still feasible but no new no-fit polygon is computed.
+     */
+    boolean bottomLeft(Orientation o, Nfp.Cache cache, double eps, Scratch s, Position out, boolean cheap) {
         double ix0 = slot.cx0 - o.bMinX;
         double iy0 = slot.cy0 - o.bMinY;
         double ix1;
@@ -95,7 +104,7 @@ final class Bin {
         // gather translated convex pieces that reach into the inner-fit rectangle
         s.clearPieces();
         for (int k = 0; k < count; k++) {
-            Nfp nfp = cache.get(orient[k], o.id);
+            Nfp nfp = cache.get(orient[k], o.id, cheap);
             double px = tx[k];
             double py = ty[k];
             if (nfp.minX + px >= ix1 - eps || nfp.maxX + px <= ix0 + eps || nfp.minY + py >= iy1 - eps || nfp.maxY + py <= iy0 + eps) {

@@ -153,6 +153,73 @@ final class ConvexPolygon {
 
     /** Minkowski sum this + (-other): the positions of other's origin where the two interiors overlap. */
     ConvexPolygon minusSum(ConvexPolygon other) {
+        // merge the edges of this and of -other by angle (both counter-clockwise, from their lowest vertices): the
+        // visited sums a_i - b_j include every vertex of the sum; near-parallel edges add both orders. The hull of
+        // those few points is the hull of all n * m differences.
+        int n = xs.length;
+        int m = other.xs.length;
+        int i0 = lowest(xs, ys, 1);
+        int j0 = lowest(other.xs, other.ys, -1);
+        double[] px = new double[2 * (n + m) + 2];
+        double[] py = new double[px.length];
+        int k = 0;
+        int i = 0;
+        int j = 0;
+        while (i < n || j < m) {
+            int ia = (i0 + i) % n;
+            int jb = (j0 + j) % m;
+            px[k] = xs[ia] - other.xs[jb];
+            py[k] = ys[ia] - other.ys[jb];
+            k++;
+            if (i == n) {
+                j++;
+                continue;
+            }
+            if (j == m) {
+                i++;
+                continue;
+            }
+            int ia1 = (ia + 1) % n;
+            int jb1 = (jb + 1) % m;
+            double ex = xs[ia1] - xs[ia];
+            double ey = ys[ia1] - ys[ia];
+            double fx = other.xs[jb] - other.xs[jb1];
+            double fy = other.ys[jb] - other.ys[jb1];
+            double cr = ex * fy - ey * fx;
+            double tol = 1e-9 * (Math.abs(ex) + Math.abs(ey)) * (Math.abs(fx) + Math.abs(fy));
+            if (cr > tol) {
+                i++;
+            } else if (cr < -tol) {
+                j++;
+            } else {
+                px[k] = xs[ia1] - other.xs[jb];
+                py[k] = ys[ia1] - other.ys[jb];
+                k++;
+                px[k] = xs[ia] - other.xs[jb1];
+                py[k] = ys[ia] - other.ys[jb1];
+                k++;
+                i++;
+                j++;
+            }
+        }
+        return hull(px, py, k);
+    }
+
+    /** Index of the lowest vertex (then leftmost) of the points times {@code sign}. */
+    private static int lowest(double[] xs, double[] ys, int sign) {
+        int best = 0;
+        for (int i = 1; i < xs.length; i++) {
+            double y = sign * ys[i];
+            double by = sign * ys[best];
+            if (y < by || (y == by && sign * xs[i] < sign * xs[best])) {
+                best = i;
+            }
+        }
+        return best;
+    }
+
+    /** The hull of all n * m differences (reference for {@link #minusSum}). */
+    ConvexPolygon minusSumByHull(ConvexPolygon other) {
         int n = xs.length * other.xs.length;
         double[] px = new double[n];
         double[] py = new double[n];

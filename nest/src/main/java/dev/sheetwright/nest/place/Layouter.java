@@ -24,6 +24,11 @@ final class Layouter {
     private final int[] evBin;
     private final boolean[] evNew;
     final int[] evInst;
+    /** From this time (System.nanoTime) on, only the quick orientations are tried. */
+    private long quickFrom = Long.MAX_VALUE;
+    /** From this time on, also no new no-fit polygon is computed and only the last opened stock is tried. */
+    private long cheapFrom = Long.MAX_VALUE;
+    private boolean timed;
 
     Layouter(Problem pb) {
         this.pb = pb;
@@ -53,6 +58,17 @@ final class Layouter {
         }
     }
 
+    /**
+     * Sets when placing gets cheaper (System.nanoTime values; Long.MAX_VALUE: never): from {@code quickFrom} on only
+     * the quick orientations are tried; from {@code cheapFrom} on, pairs without a known exact no-fit polygon use
+     * that of their bounding boxes and only the last opened stock and new stock are tried. Positions stay feasible.
+     */
+    void degradeAt(long quickFrom, long cheapFrom) {
+        this.quickFrom = quickFrom;
+        this.cheapFrom = cheapFrom;
+        this.timed = quickFrom != Long.MAX_VALUE || cheapFrom != Long.MAX_VALUE;
+    }
+
     void run(int[] order, int from) {
         rollback(from);
         for (int i = from; i < order.length; i++) {
@@ -60,13 +76,37 @@ final class Layouter {
         }
     }
 
+    /**
+     * As {@link #run(int[], int)} but stops when {@code deadline} (System.nanoTime) passes; returns false then, with
+     * the layout incomplete.
+     */
+    boolean run(int[] order, int from, long deadline) {
+        rollback(from);
+        for (int i = from; i < order.length; i++) {
+            if (System.nanoTime() >= deadline) {
+                return false;
+            }
+            placeOne(order[i]);
+        }
+        return true;
+    }
+
+    private List<Orientation> tryList;
+    private boolean cheap;
+    private boolean degraded;
+
     private void placeOne(int inst) {
         int t = pb.instType[inst];
+        long now = timed ? System.nanoTime() : 0;
+        cheap = timed && now >= cheapFrom;
+        boolean quick = timed && now >= quickFrom;
+        tryList = quick ? pb.quickOrientations.get(t) : pb.placeOrientations.get(t);
+        degraded = quick || cheap;
         evInst[steps] = inst;
         evNew[steps] = false;
         evBin[steps] = -1;
         if (pb.tooLarge[t] == null) {
-            for (int b = 0; b < bins.size(); b++) {
+            for (int b = cheap ? Math.max(0, bins.size() - 1) : 0; b < bins.size(); b++) {
                 Bin bin = bins.get(b);
                 if (bin.failCount[t] >= 0) {
                     continue;
@@ -79,7 +119,10 @@ final class Layouter {
                     commit(bin, b, inst, false);
                     return;
                 }
-                bin.failCount[t] = bin.count;
+                if (!degraded) {
+                    // a failure with fewer orientations or box no-fit polygons says nothing about the full search
+                    bin.failCount[t] = bin.count;
+                }
             }
             for (Slot slot : pb.slots) {
                 if (slotUsed[slot.index] >= slot.limit) {
@@ -90,6 +133,14 @@ final class Layouter {
                     bins.add(bin);
                     slotUsed[slot.index]++;
                     commit(bin, bins.size() - 1, inst, true);
+                    return;
+                }
+            }
+            // out of time and out of new stock: the earlier opened stock, still without new no-fit polygons
+            for (int b = 0; cheap && b < bins.size() - 1; b++) {
+                Bin bin = bins.get(b);
+                if (bin.failCount[t] < 0 && tryBin(bin, t)) {
+                    commit(bin, b, inst, false);
                     return;
                 }
             }
@@ -107,11 +158,11 @@ final class Layouter {
 
     private boolean tryBin(Bin bin, int t) {
         boolean found = false;
-        for (Orientation o : pb.orientationsByType.get(t)) {
+        for (Orientation o : tryList) {
             if (!bin.slot.boxFits(o, pb.eps)) {
                 continue;
             }
-            if (bin.bottomLeft(o, pb.cache, pb.eps, scratch, pos)) {
+            if (bin.bottomLeft(o, pb.cache, pb.eps, scratch, pos, cheap)) {
                 if (!found || pos.key1 < best.key1 || (pos.key1 == best.key1 && pos.key2 < best.key2)) {
                     best.x = pos.x;
                     best.y = pos.y;

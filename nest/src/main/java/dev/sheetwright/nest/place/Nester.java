@@ -39,6 +39,10 @@ import dev.sheetwright.nest.model.Unplaced;
 public final class Nester {
     /** Threshold of the acceptance rule at the start of the search, relative to the current objective. */
     static final double START_THRESHOLD = 0.004;
+    /** Share of a timed run after which the constructive pass tries only the quick orientations. */
+    static final double QUICK_AT = 0.4;
+    /** Share of a timed run after which the constructive pass computes no new no-fit polygons. */
+    static final double CHEAP_AT = 0.7;
 
     private final Problem pb;
     private final NestOptions options;
@@ -115,11 +119,19 @@ public final class Nester {
             SplittableRandom rnd = new SplittableRandom(options.seed() * 0x9E3779B97F4A7C15L + id * 0xBF58476D1CE4E5B9L + 1);
             int[] order = initialOrder(id, rnd);
             Layouter lay = new Layouter(pb);
+            long tc = System.nanoTime();
+            boolean fixed = options.iterations().isPresent();
+            if (!fixed) {
+                // the constructive pass gets a share of the budget, then places with fewer orientations, then
+                // without computing new no-fit polygons, so that it ends in time whatever the job
+                long b = Math.max(0, deadline - tc);
+                lay.degradeAt(tc + (long) (QUICK_AT * b), tc + (long) (CHEAP_AT * b));
+            }
             lay.run(order, 0);
+            lay.degradeAt(Long.MAX_VALUE, Long.MAX_VALUE);
             Layouter.Score cur = lay.score();
             Solution best = lay.snapshot(cur);
             int n = order.length;
-            boolean fixed = options.iterations().isPresent();
             long total = fixed ? share(options.iterations().getAsLong(), options.threads(), id) : Long.MAX_VALUE;
             long start = System.nanoTime();
             long budget = Math.max(1, deadline - start);
@@ -145,7 +157,11 @@ public final class Nester {
                 if (from < 0) {
                     continue;
                 }
-                lay.run(cand, Math.min(from, valid));
+                if (fixed) {
+                    lay.run(cand, Math.min(from, valid));
+                } else if (!lay.run(cand, Math.min(from, valid), deadline)) {
+                    break;
+                }
                 valid = n;
                 Layouter.Score s = lay.score();
                 if (s.acceptableAgainst(cur, threshold)) {

@@ -4,12 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.ConcurrentHashMap;
 
-import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.Geometry;
-import org.locationtech.jts.geom.GeometryFactory;
-import org.locationtech.jts.geom.Polygon;
-import org.locationtech.jts.operation.overlayng.UnaryUnionNG;
-
 /**
  * No-fit polygon of a moving orientation against a fixed one, kept as the list of convex Minkowski sums
  * conv(a + (-b)) over all pairs of convex pieces: the union is the set of reference positions of the moving
@@ -19,8 +13,8 @@ final class Nfp {
     /** The convex sums themselves: the exact region, used to test positions (keeps zero-width slits feasible). */
     final ConvexPolygon[] parts;
     /**
-     * The same region as fewer convex pieces with the shared edges marked open (from a union when there are many
-     * sums), used to generate candidate positions; the same array as {@link #parts} when no union was formed.
+     * The boundary of the region as chains of edges, connecting edges marked open (when there are many sums), used
+     * to generate candidate positions; the same array as {@link #parts} when no boundary was formed.
      */
     final ConvexPolygon[] outline;
     /** Convex regions inside the no-fit region where the moving part sits in a hole (or around the fixed one). */
@@ -115,7 +109,7 @@ final class Nfp {
             }
         }
         if (out.size() > UNION_ABOVE) {
-            List<ConvexPolygon> merged = unionAndSplit(out);
+            List<ConvexPolygon> merged = unionBoundary(out);
             if (merged != null) {
                 return new Nfp(out, merged);
             }
@@ -123,47 +117,164 @@ final class Nfp {
         return new Nfp(out);
     }
 
-    /** Above this many convex sums the union is formed and split again into (fewer) convex pieces. */
+    /** Above this many convex sums the boundary of their union is formed for candidate generation. */
     static final int UNION_ABOVE = 12;
-    private static final GeometryFactory GF = new GeometryFactory();
 
     /**
-     * Boundary rings of the union of the sums (exterior and holes), each kept as a closed edge chain for candidate
-     * generation only; null if the union fails.
+     * The boundary of the union of the sums, for candidate generation only: each sum's edges with the parts lying
+     * strictly inside another sum cut away, kept per sum as one chain whose connecting edges are marked open (they
+     * give no candidates). An edge shared with a sum on its other side is inside the union and cut away as well
+     * (positions there could pass the test against the sums while overlapping); collinear overlapping outer edges
+     * are all kept. Null when that leaves no fewer edges than the sums themselves have.
      */
-    private static List<ConvexPolygon> unionAndSplit(List<ConvexPolygon> parts) {
-        List<Geometry> polys = new ArrayList<>();
-        int rawVertices = 0;
+    static List<ConvexPolygon> unionBoundary(List<ConvexPolygon> parts) {
+        int rawEdges = 0;
+        double scale = 1;
         for (ConvexPolygon c : parts) {
-            Coordinate[] cs = new Coordinate[c.size() + 1];
-            for (int i = 0; i < c.size(); i++) {
-                cs[i] = new Coordinate(c.xs[i], c.ys[i]);
-            }
-            cs[c.size()] = cs[0].copy();
-            polys.add(GF.createPolygon(cs));
-            rawVertices += c.size();
+            rawEdges += c.size();
+            scale = Math.max(scale, Math.max(Math.max(Math.abs(c.minX), Math.abs(c.maxX)), Math.max(Math.abs(c.minY), Math.abs(c.maxY))));
         }
-        try {
-            Geometry u = UnaryUnionNG.union(GF.buildGeometry(polys), GF.getPrecisionModel());
-            if (u == null || u.isEmpty()) {
-                return null;
-            }
-            List<ConvexPolygon> rings = new ArrayList<>();
-            int vertices = 0;
-            for (int g = 0; g < u.getNumGeometries(); g++) {
-                Polygon p = (Polygon) u.getGeometryN(g);
-                rings.add(ConvexPolygon.ring(p.getExteriorRing().getCoordinates()));
-                for (int h = 0; h < p.getNumInteriorRing(); h++) {
-                    rings.add(ConvexPolygon.ring(p.getInteriorRingN(h).getCoordinates()));
+        double eps = scale * 1e-9;
+        List<ConvexPolygon> chains = new ArrayList<>();
+        int edges = 0;
+        double[] keep = new double[16];
+        double[] px = new double[32];
+        double[] py = new double[32];
+        boolean[] closed = new boolean[32];
+        for (int p = 0; p < parts.size(); p++) {
+            ConvexPolygon a = parts.get(p);
+            int n = a.size();
+            int m = 0;
+            boolean lastAtVertex = false;
+            int lastVertex = -1;
+            boolean firstAtStart = false;
+            for (int i = 0; i < n; i++) {
+                int j = i + 1 == n ? 0 : i + 1;
+                double ax = a.xs[i];
+                double ay = a.ys[i];
+                double bx = a.xs[j];
+                double by = a.ys[j];
+                keep[0] = 0;
+                keep[1] = 1;
+                int k = 1;
+                double sx0 = Math.min(ax, bx);
+                double sx1 = Math.max(ax, bx);
+                double sy0 = Math.min(ay, by);
+                double sy1 = Math.max(ay, by);
+                for (int q = 0; q < parts.size() && k > 0; q++) {
+                    ConvexPolygon b = parts.get(q);
+                    if (q == p || b.minX > sx1 || b.maxX < sx0 || b.minY > sy1 || b.maxY < sy0) {
+                        continue;
+                    }
+                    // the open interval of t where a + t (b - a) is strictly inside (by eps) polygon q
+                    double lo = 0;
+                    double hi = 1;
+                    for (int e = 0; e < b.size() && lo < hi; e++) {
+                        double d0 = b.nx[e] * ax + b.ny[e] * ay - b.c[e] + eps;
+                        double dd = b.nx[e] * (bx - ax) + b.ny[e] * (by - ay);
+                        if (b.nx[e] * a.nx[i] + b.ny[e] * a.ny[i] < -1 + 1e-9 && Math.abs(d0 - eps) <= eps
+                                && Math.abs(d0 - eps + dd) <= eps) {
+                            // q's edge on the same line, q on the other side: the shared part is inside the union
+                            continue;
+                        }
+                        if (dd == 0) {
+                            if (d0 >= 0) {
+                                hi = lo;
+                            }
+                        } else if (dd > 0) {
+                            hi = Math.min(hi, -d0 / dd);
+                        } else {
+                            lo = Math.max(lo, -d0 / dd);
+                        }
+                    }
+                    if (hi - lo > 1e-12) {
+                        if (keep.length < 2 * k + 2) {
+                            keep = java.util.Arrays.copyOf(keep, keep.length * 2);
+                        }
+                        k = cut(keep, k, lo, hi);
+                    }
+                }
+                double len = Math.hypot(bx - ax, by - ay);
+                for (int r = 0; r < k; r++) {
+                    double t0 = keep[2 * r];
+                    double t1 = keep[2 * r + 1];
+                    if ((t1 - t0) * len <= 4 * eps && !(t0 == 0 && t1 == 1)) {
+                        // a sliver left where the edge enters another sum: no new vertex of the union
+                        continue;
+                    }
+                    if (m + 2 > px.length) {
+                        px = java.util.Arrays.copyOf(px, px.length * 2);
+                        py = java.util.Arrays.copyOf(py, py.length * 2);
+                        closed = java.util.Arrays.copyOf(closed, closed.length * 2);
+                    }
+                    if (m > 0 && lastAtVertex && lastVertex == i && t0 == 0) {
+                        closed[m - 1] = true;
+                    } else {
+                        if (m == 0 && i == 0 && t0 == 0) {
+                            firstAtStart = true;
+                        }
+                        px[m] = t0 == 0 ? ax : ax + t0 * (bx - ax);
+                        py[m] = t0 == 0 ? ay : ay + t0 * (by - ay);
+                        closed[m] = true;
+                        m++;
+                    }
+                    px[m] = t1 == 1 ? bx : ax + t1 * (bx - ax);
+                    py[m] = t1 == 1 ? by : ay + t1 * (by - ay);
+                    closed[m] = false;
+                    m++;
+                    lastAtVertex = t1 == 1;
+                    lastVertex = j;
                 }
             }
-            for (ConvexPolygon r : rings) {
-                vertices += r.size();
+            if (m == 0) {
+                continue;
             }
-            return vertices < rawVertices ? rings : null;
-        } catch (RuntimeException e) {
-            return null;
+            if (m > 2 && firstAtStart && lastAtVertex && lastVertex == 0) {
+                // the chain ends where it started: drop the repeated point and close the ring
+                m--;
+                closed[m - 1] = true;
+            }
+            if (m < 2) {
+                continue;
+            }
+            double[] xs = java.util.Arrays.copyOf(px, m);
+            double[] ys = java.util.Arrays.copyOf(py, m);
+            boolean[] open = new boolean[m];
+            boolean anyOpen = false;
+            for (int i = 0; i < m; i++) {
+                open[i] = !closed[i];
+                anyOpen |= open[i];
+                edges += closed[i] ? 1 : 0;
+            }
+            ConvexPolygon ring = ConvexPolygon.ring(xs, ys);
+            chains.add(anyOpen ? ring.withOpenEdges(open) : ring);
         }
+        return edges < rawEdges ? chains : null;
+    }
+
+    /** Removes the open interval (lo, hi) from the k sorted disjoint intervals in keep; returns the new count. */
+    private static int cut(double[] keep, int k, double lo, double hi) {
+        double[] out = new double[2 * k + 2];
+        int n = 0;
+        for (int r = 0; r < k; r++) {
+            double a = keep[2 * r];
+            double b = keep[2 * r + 1];
+            if (hi <= a || lo >= b) {
+                out[n++] = a;
+                out[n++] = b;
+                continue;
+            }
+            if (lo > a) {
+                out[n++] = a;
+                out[n++] = lo;
+            }
+            if (hi < b) {
+                out[n++] = hi;
+                out[n++] = b;
+            }
+        }
+        System.arraycopy(out, 0, keep, 0, n);
+        return n / 2;
     }
 
     /** This no-fit polygon turned counter-clockwise by {@code deg} about the origin. */
@@ -184,11 +295,50 @@ final class Nfp {
         private final List<Orientation> orientations;
         private final java.util.Map<String, Integer> byKey = new java.util.HashMap<>();
 
+        /** canon[id]: the same orientation of the lowest type with the same outline (they share no-fit polygons). */
+        private final int[] canon;
+        private final ConcurrentHashMap<Long, Nfp> boxes = new ConcurrentHashMap<>();
+
         Cache(List<Orientation> orientations) {
+            this(orientations, null);
+        }
+
+        Cache(List<Orientation> orientations, int[] canonicalType) {
             this.orientations = orientations;
             for (Orientation o : orientations) {
                 byKey.put(key(o.type, o.angleDeg, o.mirrored), o.id);
             }
+            canon = new int[orientations.size()];
+            for (Orientation o : orientations) {
+                Integer c = canonicalType == null ? null : byKey.get(key(canonicalType[o.type], o.angleDeg, o.mirrored));
+                canon[o.id] = c == null ? o.id : c;
+            }
+        }
+
+        /**
+         * The exact no-fit polygon when it is already known, else (when {@code cheap}) the no-fit polygon of the two
+         * spacing bounding boxes, which contains the exact one: a position outside it is feasible too.
+         */
+        Nfp get(int fixedId, int movingId, boolean cheap) {
+            if (!cheap) {
+                return get(fixedId, movingId);
+            }
+            long k = ((long) canon[fixedId] << 32) | canon[movingId];
+            Nfp n = map.get(k);
+            if (n != null) {
+                return n;
+            }
+            n = boxes.get(k);
+            if (n == null) {
+                Orientation f = orientations.get(canon[fixedId]);
+                Orientation m = orientations.get(canon[movingId]);
+                double[] xs = {f.sMinX - m.sMaxX, f.sMaxX - m.sMinX, f.sMaxX - m.sMinX, f.sMinX - m.sMaxX};
+                double[] ys = {f.sMinY - m.sMaxY, f.sMinY - m.sMaxY, f.sMaxY - m.sMinY, f.sMaxY - m.sMinY};
+                ConvexPolygon box = ConvexPolygon.of(xs, ys);
+                n = new Nfp(box == null ? List.of() : List.of(box));
+                boxes.putIfAbsent(k, n);
+            }
+            return n;
         }
 
         private static String key(int type, double deg, boolean mirrored) {
@@ -197,6 +347,8 @@ final class Nfp {
         }
 
         Nfp get(int fixedId, int movingId) {
+            fixedId = canon[fixedId];
+            movingId = canon[movingId];
             long k = ((long) fixedId << 32) | movingId;
             Nfp n = map.get(k);
             if (n != null) {

@@ -68,7 +68,8 @@ final class Orientation {
                 xs[i] = p.xs[i] * sc[1] - p.ys[i] * sc[0];
                 ys[i] = p.xs[i] * sc[0] + p.ys[i] * sc[1];
             }
-            out.add(ConvexPolygon.ring(xs, ys));
+            ConvexPolygon r = ConvexPolygon.ring(xs, ys);
+            out.add(p.open == null ? r : r.withOpenEdges(p.open));
         }
         return out;
     }

@@ -31,6 +31,19 @@ final class Problem {
     final NestRequest request;
     final List<NestPiece> types;
     final List<List<Orientation>> orientationsByType = new ArrayList<>();
+    /**
+     * The orientations the layouter tries, per type: all of {@link #orientationsByType}, except that a sampled free
+     * rotation (more than {@link #COARSE_ABOVE} angles) is placed at the quarter turns only, which is where developed
+     * duct patterns (drawn with their chord or seam along an axis) pack and which keeps the number of distinct no-fit
+     * polygons small; the full set is kept for a type that fits no stock at a quarter turn.
+     */
+    final List<List<Orientation>> placeOrientations = new ArrayList<>();
+    /** The cheapest orientations per type (0 and 90 degrees where they fit): used when the time is nearly spent. */
+    final List<List<Orientation>> quickOrientations = new ArrayList<>();
+    /** canonicalType[t]: lowest type with the same outline as t (same no-fit polygons), else t. */
+    final int[] canonicalType;
+    /** Free rotations sampled at more angles than this are placed at the quarter turns only. */
+    static final int COARSE_ABOVE = 8;
     final List<Orientation> orientations = new ArrayList<>();
     final double[] typeArea;
     /** instance i = (type, copy) */
@@ -90,11 +103,53 @@ final class Problem {
             }
         }
         buildSlots(rules);
-        cache = new Nfp.Cache(orientations);
+        canonicalType = new int[types.size()];
+        for (int t = 0; t < types.size(); t++) {
+            canonicalType[t] = t;
+            for (int u = 0; u < t; u++) {
+                if (canonicalType[u] == u && types.get(u).shape().equalsExact(types.get(t).shape(), 0)) {
+                    canonicalType[t] = u;
+                    break;
+                }
+            }
+        }
+        boolean coarse = rules.rotation() instanceof dev.sheetwright.nest.model.RotationRule.Free && angles.size() > COARSE_ABOVE;
+        for (int t = 0; t < types.size(); t++) {
+            List<Orientation> all = orientationsByType.get(t);
+            List<Orientation> place = coarse ? fitting(all, 90) : all;
+            placeOrientations.add(place.isEmpty() ? all : place);
+            List<Orientation> quick = fitting(placeOrientations.get(t), 90);
+            List<Orientation> q2 = new ArrayList<>();
+            for (Orientation o : quick) {
+                if (!o.mirrored && (o.angleDeg == 0 || o.angleDeg == 90)) {
+                    q2.add(o);
+                }
+            }
+            quickOrientations.add(q2.isEmpty() ? placeOrientations.get(t) : q2);
+        }
+        cache = new Nfp.Cache(orientations, canonicalType);
         tooLarge = new String[types.size()];
         for (int t = 0; t < types.size(); t++) {
             tooLarge[t] = fitsSomewhere(t) ? null : tooLargeReason(t, rules.margin());
         }
+    }
+
+    /** Those of {@code list} at a multiple of {@code step} degrees whose box fits some slot with stock left. */
+    private List<Orientation> fitting(List<Orientation> list, double step) {
+        List<Orientation> out = new ArrayList<>();
+        for (Orientation o : list) {
+            double q = o.angleDeg / step;
+            if (Math.abs(q - Math.rint(q)) > 1e-9) {
+                continue;
+            }
+            for (Slot slot : slots) {
+                if (slot.limit > 0 && slot.boxFits(o, eps)) {
+                    out.add(o);
+                    break;
+                }
+            }
+        }
+        return out;
     }
 
     /** The outer rings only (holes filled). */

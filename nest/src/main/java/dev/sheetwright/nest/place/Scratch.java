@@ -251,37 +251,53 @@ final class Scratch {
         }
     }
 
-    /** covered[cell]: the whole closed cell lies strictly inside one test piece, so it holds no feasible point. */
-    private boolean[] covered = new boolean[1];
+    /**
+     * covered[cell]: 2 when the whole closed cell lies strictly inside one test piece (so it holds no feasible
+     * point), 1 when not, 0 when not yet worked out (cells are tested lazily, only where a candidate or an edge
+     * crossing needs them).
+     */
+    private byte[] covered = new byte[1];
+    private double coverEps;
 
     private void markCovered(double eps) {
         int cells = g * g;
         if (covered.length < cells) {
-            covered = new boolean[cells];
+            covered = new byte[cells];
         }
-        for (int cell = 0; cell < cells; cell++) {
-            covered[cell] = false;
-            int a = cell % g;
-            int b = cell / g;
-            double lx = gx0 + a * cellW;
-            double ly = gy0 + b * cellH;
-            double hx = lx + cellW;
-            double hy = ly + cellH;
-            for (int p = pieceStart[cell], e = pieceStart[cell + 1]; p < e; p++) {
-                int k = pieceCells[p];
-                ConvexPolygon c = pc[k];
-                if (c.containsStrictly(lx, ly, ptx[k], pty[k], eps) && c.containsStrictly(hx, hy, ptx[k], pty[k], eps)
-                        && c.containsStrictly(lx, hy, ptx[k], pty[k], eps) && c.containsStrictly(hx, ly, ptx[k], pty[k], eps)
-                        && (owner[k] < 0 || !pocketTouches(owner[k], lx - eps, ly - eps, hx + eps, hy + eps))) {
-                    covered[cell] = true;
-                    break;
-                }
+        Arrays.fill(covered, 0, cells, (byte) 0);
+        coverEps = eps;
+    }
+
+    private boolean covered(int cell) {
+        byte v = covered[cell];
+        if (v == 0) {
+            v = computeCovered(cell, coverEps) ? (byte) 2 : (byte) 1;
+            covered[cell] = v;
+        }
+        return v == 2;
+    }
+
+    private boolean computeCovered(int cell, double eps) {
+        int a = cell % g;
+        int b = cell / g;
+        double lx = gx0 + a * cellW;
+        double ly = gy0 + b * cellH;
+        double hx = lx + cellW;
+        double hy = ly + cellH;
+        for (int p = pieceStart[cell], e = pieceStart[cell + 1]; p < e; p++) {
+            int k = pieceCells[p];
+            ConvexPolygon c = pc[k];
+            if (c.containsStrictly(lx, ly, ptx[k], pty[k], eps) && c.containsStrictly(hx, hy, ptx[k], pty[k], eps)
+                    && c.containsStrictly(lx, hy, ptx[k], pty[k], eps) && c.containsStrictly(hx, ly, ptx[k], pty[k], eps)
+                    && (owner[k] < 0 || !pocketTouches(owner[k], lx - eps, ly - eps, hx + eps, hy + eps))) {
+                return true;
             }
         }
+        return false;
     }
 
     private boolean isCovered(double x, double y) {
-        return covered[cellY(y) * g + cellX(x)];
+        return covered(cellY(y) * g + cellX(x));
     }
 
     private int prefix(int[] start, int cells) {
@@ -370,7 +386,7 @@ final class Scratch {
         for (int cell = 0; cell < cells; cell++) {
             int from = edgeStart[cell];
             int to = edgeStart[cell + 1];
-            if (to - from < 2 || covered[cell]) {
+            if (to - from < 2 || covered(cell)) {
                 continue;
             }
             int ca = cell % g;

@@ -133,6 +133,38 @@ class NesterTest {
     }
 
     @Test
+    void nest_noTimeAtAll_everyCopyPlacedFeasibly() {
+        // a zero budget: the constructive pass places everything without new no-fit polygons (box ones instead)
+        NestRequest req = dev.sheetwright.nest.bench.SheetBenchmark.job(40, 3);
+        NestResult r = nestChecked(req, NestOptions.timed(java.time.Duration.ZERO, 1, 2));
+        assertEquals(req.totalCopies(), r.placedCount());
+    }
+
+    @Test
+    void nest_shortTimeOnCurvedJob_endsSoonAfterTheLimit() {
+        NestRequest req = dev.sheetwright.nest.bench.SheetBenchmark.job(80, 5);
+        long t0 = System.nanoTime();
+        NestResult r = nestChecked(req, NestOptions.timed(java.time.Duration.ofMillis(500), 1, 2));
+        double seconds = (System.nanoTime() - t0) / 1e9;
+        assertEquals(req.totalCopies(), r.placedCount());
+        // the constructive pass alone takes several seconds on this job; a generous bound for a busy machine
+        assertTrue(seconds < 6, "took " + seconds + " s");
+    }
+
+    @Test
+    void nest_freeRotation_placedAtQuarterTurns() {
+        Polygon l = Shapes.wkt("POLYGON ((0 0, 10 0, 10 2, 2 2, 2 6, 0 6, 0 0))");
+        NestRequest req = new NestRequest(List.of(NestPiece.of("a", "l", 5, l), NestPiece.of("b", "l", 5, l)),
+                List.of(new Sheet("s", 40, 20, OptionalInt.empty(), 1)), new NestRules(0.25, 0.5, RotationRule.free(), false, 0.01));
+        NestResult r = nestChecked(req, NestOptions.steps(20, 3, 2));
+        for (SheetLayout s : r.sheets()) {
+            for (Placement p : s.parts()) {
+                assertEquals(0, p.rotationDeg() % 90, 1e-9);
+            }
+        }
+    }
+
+    @Test
     void nest_nullRequest_rejected() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Nester.nest(null, NestOptions.constructiveOnly()));
         assertEquals("request must not be null", e.getMessage());
