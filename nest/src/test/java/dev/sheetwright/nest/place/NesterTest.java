@@ -116,9 +116,12 @@ class NesterTest {
                 new NestRules(0.5, 0.5, RotationRule.none(), false, 0));
         NestResult r = nestChecked(req, NestOptions.constructiveOnly());
         assertNotNull(r.sheets().get(0).offcut());
-        // 2 x 2 squares: x from 0.5 to 41; offcut from 41 + gap 0.5 to 120, full height
-        assertEquals(41.5, r.sheets().get(0).offcut().x(), 1e-9);
-        assertEquals(78.5 * 48, r.sheets().get(0).offcut().area(), 1e-6);
+        // 2 x 2 squares: x from 0.5 to 41 (plus the spacing safety, 1 % of the gap, between the two columns);
+        // offcut from there + gap 0.5 to 120, full height
+        double spacing = 0.5 * (1 + Problem.GAP_SAFETY);
+        double start = 0.5 + 20 + spacing + 20 + 0.5;
+        assertEquals(start, r.sheets().get(0).offcut().x(), 1e-9);
+        assertEquals((120 - start) * 48, r.sheets().get(0).offcut().area(), 1e-6);
     }
 
     @Test
