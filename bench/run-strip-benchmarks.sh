@@ -10,7 +10,10 @@ here="$(cd "$(dirname "$0")" && pwd)"
 root="$(dirname "$here")"
 times="10,60"
 seed=1
-dir="$root/../shared/nesting-benchmarks"
+# the shared folder: $SHEETWRIGHT_SHARED, else ../shared beside the repository, else /work/shared
+shared="${SHEETWRIGHT_SHARED:-$root/../shared}"
+[ -d "$shared" ] || shared=/work/shared
+dir="$shared/nesting-benchmarks"
 jar="$root/cli/target/sheetwright.jar"
 only=""
 out="$here/strip-results.md"
