@@ -27,11 +27,20 @@ public final class SimplePolygons {
         return true;
     }
 
+    /** Relative size below which a cross product counts as zero (points on one line, e.g. two radial edges). */
+    private static final double EPS = 1e-12;
+
     private static boolean properlyCross(Point2 a, Point2 b, Point2 c, Point2 d) {
-        double d1 = b.minus(a).cross(c.minus(a));
-        double d2 = b.minus(a).cross(d.minus(a));
-        double d3 = d.minus(c).cross(a.minus(c));
-        double d4 = d.minus(c).cross(b.minus(c));
+        double scale = Math.max(b.minus(a).length(), d.minus(c).length());
+        double zero = EPS * scale * scale;
+        double d1 = side(b.minus(a).cross(c.minus(a)), zero);
+        double d2 = side(b.minus(a).cross(d.minus(a)), zero);
+        double d3 = side(d.minus(c).cross(a.minus(c)), zero);
+        double d4 = side(d.minus(c).cross(b.minus(c)), zero);
         return d1 * d2 < 0 && d3 * d4 < 0;
+    }
+
+    private static double side(double cross, double zero) {
+        return Math.abs(cross) <= zero ? 0 : Math.signum(cross);
     }
 }
