@@ -162,8 +162,8 @@ class TransitionProperties {
         try {
             d = TransitionDeveloper.develop(withAllowances, CTX);
         } catch (FittingException e) {
-            // refused only in one piece, when the pattern or its seam strips lap over
-            assertEquals(1, s.pieces(), e.getMessage());
+            // a refusal is allowed (the pattern or its allowance strips would lap over), a bad outline is not
+            assertTrue(e.field().equals("pieces") || e.field().equals("allowances"), e.getMessage());
             Assume.that(false);
             return;
         }
