@@ -1,5 +1,6 @@
 package dev.sheetwright.cli;
 
+import dev.sheetwright.core.units.Lengths;
 import dev.sheetwright.core.units.LengthUnit;
 import java.util.Locale;
 
@@ -8,10 +9,10 @@ final class SizeText {
     private SizeText() {
     }
 
-    /** {@code "48x30"} (also {@code X}, {@code *}, blanks) in {@code unit} → {width, height} in mm. */
+    /** {@code "48x30"} or {@code "47 15/16 x 30"} in {@code unit} → {width, height} in mm. */
     static double[] parseSize(String text, LengthUnit unit) {
-        String[] parts = text.strip().split("\\s*[xX*]\\s*");
-        if (parts.length != 2) {
+        String[] parts = Lengths.sizeParts(text);
+        if (parts == null) {
             throw new IllegalArgumentException("--size: '" + text + "' is not a size; write WIDTHxHEIGHT, e.g. 48x30");
         }
         return new double[] {unit.toMm(number("--size", text, parts[0])), unit.toMm(number("--size", text, parts[1]))};
@@ -31,12 +32,8 @@ final class SizeText {
 
     private static double number(String option, String whole, String part) {
         try {
-            double v = Double.parseDouble(part.strip());
-            if (!Double.isFinite(v)) {
-                throw new NumberFormatException();
-            }
-            return v;
-        } catch (NumberFormatException e) {
+            return Lengths.parse(part.strip());
+        } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException(option + ": '" + whole + "': '" + part.strip() + "' is not a number");
         }
     }

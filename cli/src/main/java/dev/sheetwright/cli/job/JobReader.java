@@ -532,23 +532,16 @@ public final class JobReader {
     }
 
     private static double[] size(Fields f, String key) {
-        String text = f.string(key).toLowerCase(Locale.ROOT).replace(" ", "");
-        String[] parts = text.split("x");
-        if (parts.length != 2) {
-            throw f.error(key, "write a size as W x L, e.g. 48x120; got '" + f.string(key) + "'");
-        }
+        double[] wl;
         try {
-            double w = Lengths.parse(parts[0]);
-            double l = Lengths.parse(parts[1]);
-            if (!(w > 0 && l > 0)) {
-                throw f.error(key, "both sides must be positive, got '" + f.string(key) + "'");
-            }
-            return new double[] {w, l};
-        } catch (JobFileException e) {
-            throw e;
+            wl = Lengths.parseSize(f.string(key));
         } catch (IllegalArgumentException e) {
             throw f.error(key, e.getMessage());
         }
+        if (!(wl[0] > 0 && wl[1] > 0)) {
+            throw f.error(key, "both sides must be positive, got '" + f.string(key) + "'");
+        }
+        return wl;
     }
 
     private static List<Point2> polygon(Fields f, String key) {

@@ -49,4 +49,24 @@ public final class Lengths {
         }
         return (double) Long.parseLong(num) / d;
     }
+
+    /**
+     * Reads a sheet or remnant size {@code W x L} ({@code 48x120}, {@code 47 15/16 x 30}, {@code X} or {@code *}
+     * also separate), each side as {@link #parse(String)} reads it. The caller checks the range.
+     *
+     * @return {width, length} in the unit the text is written in
+     */
+    public static double[] parseSize(String text) {
+        String[] parts = sizeParts(text);
+        if (parts == null) {
+            throw new IllegalArgumentException("'" + text + "' is not a size; write W x L, e.g. 48x120");
+        }
+        return new double[] {parse(parts[0]), parse(parts[1])};
+    }
+
+    /** The two sides of a size as written ({@code "47 15/16 x 30"} → {"47 15/16", "30"}), or null if not a size. */
+    public static String[] sizeParts(String text) {
+        String[] parts = text == null ? new String[0] : text.strip().split("\\s*[xX*]\\s*");
+        return parts.length == 2 ? parts : null;
+    }
 }

@@ -24,4 +24,17 @@ class LengthsTest {
                 + " (18 7/8 or 12-1/2)", e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> Lengths.parse("3/0"));
     }
+
+    @Test
+    void parseSize_ticketForms() {
+        assertEquals(java.util.List.of(48.0, 120.0), boxed(Lengths.parseSize("48x120")));
+        assertEquals(java.util.List.of(47.9375, 30.0), boxed(Lengths.parseSize("47 15/16 x 30")));
+        assertEquals(java.util.List.of(12.5, 96.0), boxed(Lengths.parseSize("12-1/2 X 96")));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Lengths.parseSize("48 by 120"));
+        assertEquals("'48 by 120' is not a size; write W x L, e.g. 48x120", e.getMessage());
+    }
+
+    private static java.util.List<Double> boxed(double[] v) {
+        return java.util.List.of(v[0], v[1]);
+    }
 }
