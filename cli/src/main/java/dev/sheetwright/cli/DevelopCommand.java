@@ -1,6 +1,7 @@
 package dev.sheetwright.cli;
 
 import dev.sheetwright.cli.mixin.JobFileOption;
+import dev.sheetwright.cli.output.JsonFiles;
 import dev.sheetwright.cli.output.LayoutText;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.PatternDrawings;
@@ -60,7 +61,7 @@ public final class DevelopCommand implements Callable<Integer> {
                     PatternDrawings.svgWriter(false).write(drawing, folder.file(name + ".svg"));
                 }
             }
-            PatternsJson.write(PatternsJson.document(job, developments), folder.file("patterns.json"));
+            JsonFiles.write(PatternsJson.document(job, developments), folder.file("patterns.json"));
             folder.commit();
         }
         print(job, developments, new LayoutText(job.unit(), fractions));

@@ -1,6 +1,7 @@
 package dev.sheetwright.cli;
 
 import dev.sheetwright.cli.mixin.JobFileOption;
+import dev.sheetwright.cli.output.JsonFiles;
 import dev.sheetwright.cli.output.NestJson;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.PatternDrawings;
@@ -154,8 +155,8 @@ public final class NestCommand implements Callable<Integer> {
                 DxfWriter.write(d, folder.file(NestJson.sheetFile(s) + ".dxf"));
                 PatternDrawings.svgWriter(true).write(d, folder.file(NestJson.sheetFile(s) + ".svg"));
             }
-            PatternsJson.write(doc, folder.file("nest.json"));
-            PatternsJson.write(PatternsJson.document(job, nest.developments()), folder.file("patterns.json"));
+            JsonFiles.write(doc, folder.file("nest.json"));
+            JsonFiles.write(PatternsJson.document(job, nest.developments()), folder.file("patterns.json"));
             Quote quote = QuoteFiles.write(folder, nest, jobFile.path(), shop.settings());
             folder.commit();
             return quote;

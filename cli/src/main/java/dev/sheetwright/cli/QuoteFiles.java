@@ -1,6 +1,7 @@
 package dev.sheetwright.cli;
 
 import dev.sheetwright.cli.job.JobReader;
+import dev.sheetwright.cli.output.JsonFiles;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.PatternsJson;
 import dev.sheetwright.cli.output.QuoteCsv;
@@ -28,7 +29,7 @@ public final class QuoteFiles {
     /** Computes the quote and writes the four files into the staging folder. */
     public static Quote write(OutputFolder folder, JobNest nest, Path jobFile, ShopSettings shop) {
         Quote q = quote(nest, jobFile, shop);
-        PatternsJson.write(QuoteJson.document(nest.job().name(), q), folder.file("quote.json"));
+        JsonFiles.write(QuoteJson.document(nest.job().name(), q), folder.file("quote.json"));
         QuoteCsv.write(q, folder.file("quote.csv"));
         ShopReport report = ShopReport.of(nest, q);
         ReportHtml.write(report, folder.file("report.html"));

@@ -1,7 +1,5 @@
 package dev.sheetwright.cli.output;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sheetwright.cli.Cautions;
 import dev.sheetwright.core.develop.DevelopedPiece;
 import dev.sheetwright.core.develop.Development;
@@ -10,9 +8,6 @@ import dev.sheetwright.core.develop.LayoutValue;
 import dev.sheetwright.core.geom.Box2;
 import dev.sheetwright.core.geom.Pattern;
 import dev.sheetwright.core.job.Job;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -81,13 +76,5 @@ public final class PatternsJson {
         doc.put("warnings", warnings);
         doc.put("cautions", Cautions.ALL);
         return doc;
-    }
-
-    public static void write(Map<String, Object> doc, Path file) {
-        try {
-            new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), doc);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + file, e);
-        }
     }
 }
