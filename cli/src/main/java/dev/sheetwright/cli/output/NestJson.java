@@ -89,7 +89,7 @@ public final class NestJson {
                 e.put("offcut", null);
             }
             sheets.add(e);
-            stockArea += SheetDrawings.stockArea(s);
+            stockArea += s.stockArea();
         }
         doc.put("sheets", sheets);
         List<Object> unplaced = new ArrayList<>();

@@ -79,14 +79,4 @@ public final class SheetDrawings {
         vs.add(Vertex.of(w, h));
         vs.add(Vertex.of(0, h));
     }
-
-    /** Area of the stock used by this layout (coil: width x length used). */
-    public static double stockArea(SheetLayout sheet) {
-        if (sheet.stock() instanceof Sheet s) {
-            return s.width() * s.height();
-        } else if (sheet.stock() instanceof Coil c) {
-            return c.width() * sheet.usedLength();
-        }
-        return ((Remnant) sheet.stock()).outline().getArea();
-    }
 }

@@ -19,4 +19,20 @@ public record SheetLayout(Stock stock, int index, double usedLength, List<Placem
             throw new IllegalArgumentException("utilization must be in 0..1, got " + utilization);
         }
     }
+
+    /** Area of the stock this layout uses: a whole sheet or remnant; for a coil, its width times the length cut off. */
+    public double stockArea() {
+        return stockArea(stock, usedLength);
+    }
+
+    /** Area of {@code stock} when {@code usedLength} of it is used (only a coil's area depends on it). */
+    public static double stockArea(Stock stock, double usedLength) {
+        if (stock instanceof Sheet s) {
+            return s.width() * s.height();
+        }
+        if (stock instanceof Coil c) {
+            return c.width() * usedLength;
+        }
+        return ((Remnant) stock).outline().getArea();
+    }
 }

@@ -279,22 +279,17 @@ public final class Nester {
                 maxY = Math.max(maxY, plan.y()[k] + o.bMaxY);
             }
             double used = Math.max(0, plan.usedExtent() + margin);
-            double stockArea;
             Offcut offcut = null;
             if (plan.slot().stock instanceof Sheet sh) {
-                stockArea = sh.width() * sh.height();
                 offcut = bestOffcut(0, 0, sh.width(), sh.height(), maxX + gap, maxY + gap);
-            } else if (plan.slot().stock instanceof Coil c) {
-                stockArea = c.width() * used;
-            } else {
-                Remnant r = (Remnant) plan.slot().stock;
-                stockArea = r.outline().getArea();
+            } else if (plan.slot().stock instanceof Remnant r) {
                 Envelope e = r.outline().getEnvelopeInternal();
                 Offcut o = bestOffcut(e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY(), maxX + gap, maxY + gap);
                 if (o != null && r.outline().covers(rectangle(o))) {
                     offcut = o;
                 }
             }
+            double stockArea = SheetLayout.stockArea(plan.slot().stock, used);
             double util = stockArea > 0 ? Math.min(1, partArea / stockArea) : 0;
             sheets.add(new SheetLayout(plan.slot().stock, sheets.size(), used, parts, offcut, util));
         }
