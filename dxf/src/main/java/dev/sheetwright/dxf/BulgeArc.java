@@ -8,7 +8,7 @@ package dev.sheetwright.dxf;
  * lengths to the left of the chord's midpoint. Arcs with tiny bulges have huge radii; the centre is then far away
  * and the extreme points lose absolute precision in proportion to the radius (about 1e-16 of it).
  */
-final class BulgeArc {
+public final class BulgeArc {
 
     private static final double TWO_PI = 2 * Math.PI;
 
@@ -29,7 +29,7 @@ final class BulgeArc {
     }
 
     /** The arc from (x1, y1) to (x2, y2) with the given non-zero bulge; the points must differ. */
-    static BulgeArc of(double x1, double y1, double x2, double y2, double bulge) {
+    public static BulgeArc of(double x1, double y1, double x2, double y2, double bulge) {
         if (bulge == 0) {
             throw new IllegalArgumentException("bulge must not be 0 for an arc, got 0");
         }
@@ -68,6 +68,30 @@ final class BulgeArc {
                     default -> out.include(centreX, centreY - radius);
                 };
             }
+        }
+        return out;
+    }
+
+    /**
+     * This arc as cubic Béziers of at most a quarter turn each, for vector output that has no arcs (PDF): each piece
+     * of sweep D has control arms 4/3 tan(D/4) r along the tangents (the usual circle approximation; error about
+     * 2.7e-4 r per quarter turn). Each element is {c1x, c1y, c2x, c2y, x, y}; the first piece starts at the arc's
+     * start point.
+     */
+    public java.util.List<double[]> cubicBeziers() {
+        int n = (int) Math.ceil(Math.abs(sweep) / (Math.PI / 2));
+        double step = sweep / n;
+        double k = 4.0 / 3 * Math.tan(step / 4) * radius;
+        java.util.List<double[]> out = new java.util.ArrayList<>(n);
+        for (int i = 0; i < n; i++) {
+            double a0 = startAngle + i * step;
+            double a1 = a0 + step;
+            double p0x = centreX + radius * Math.cos(a0);
+            double p0y = centreY + radius * Math.sin(a0);
+            double p3x = centreX + radius * Math.cos(a1);
+            double p3y = centreY + radius * Math.sin(a1);
+            out.add(new double[] {p0x - k * Math.sin(a0), p0y + k * Math.cos(a0),
+                p3x + k * Math.sin(a1), p3y - k * Math.cos(a1), p3x, p3y});
         }
         return out;
     }

@@ -1,6 +1,7 @@
 package dev.sheetwright.cli.output;
 
 import dev.sheetwright.core.develop.LayoutTable;
+import dev.sheetwright.dxf.BulgeArc;
 import dev.sheetwright.dxf.Bounds;
 import dev.sheetwright.dxf.Drawing;
 import dev.sheetwright.dxf.Line;
@@ -301,7 +302,7 @@ public final class ReportPdf {
             if (a.bulge() == 0) {
                 out.lineTo((float) m.x(b.x()), (float) m.y(b.y()));
             } else {
-                for (double[] c : bulgeToBeziers(a.x(), a.y(), b.x(), b.y(), a.bulge())) {
+                for (double[] c : BulgeArc.of(a.x(), a.y(), b.x(), b.y(), a.bulge()).cubicBeziers()) {
                     out.curveTo((float) m.x(c[0]), (float) m.y(c[1]), (float) m.x(c[2]), (float) m.y(c[3]),
                             (float) m.x(c[4]), (float) m.y(c[5]));
                 }
@@ -310,38 +311,5 @@ public final class ReportPdf {
         if (p.closed()) {
             out.closePath();
         }
-    }
-
-    /**
-     * A bulge arc from (x1, y1) to (x2, y2) as cubic Béziers of at most a quarter turn each: the sweep is 4 atan(bulge),
-     * the centre lies d (1 - b^2) / (4 b) to the left of the chord's midpoint, and each piece of sweep D has control
-     * arms 4/3 tan(D/4) r along the tangents (the standard circle approximation; error about 2.7e-4 r per quarter).
-     * Each element is {c1x, c1y, c2x, c2y, x, y}.
-     */
-    static List<double[]> bulgeToBeziers(double x1, double y1, double x2, double y2, double bulge) {
-        double dx = x2 - x1;
-        double dy = y2 - y1;
-        double d = Math.hypot(dx, dy);
-        double sweep = 4 * Math.atan(bulge);
-        double off = d * (1 - bulge * bulge) / (4 * bulge);
-        double cx = (x1 + x2) / 2 - dy / d * off;
-        double cy = (y1 + y2) / 2 + dx / d * off;
-        double r = Math.hypot(x1 - cx, y1 - cy);
-        double a = Math.atan2(y1 - cy, x1 - cx);
-        int n = (int) Math.ceil(Math.abs(sweep) / (Math.PI / 2));
-        double step = sweep / n;
-        double k = 4.0 / 3 * Math.tan(step / 4) * r;
-        List<double[]> out = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
-            double a0 = a + i * step;
-            double a1 = a0 + step;
-            double p0x = cx + r * Math.cos(a0);
-            double p0y = cy + r * Math.sin(a0);
-            double p3x = i == n - 1 ? x2 : cx + r * Math.cos(a1);
-            double p3y = i == n - 1 ? y2 : cy + r * Math.sin(a1);
-            out.add(new double[] {p0x - k * Math.sin(a0), p0y + k * Math.cos(a0),
-                p3x + k * Math.sin(a1), p3y - k * Math.cos(a1), p3x, p3y});
-        }
-        return out;
     }
 }
