@@ -15,12 +15,4 @@ public final class BenchCommand implements Runnable {
     public void run() {
         spec.commandLine().usage(spec.commandLine().getOut());
     }
-
-    /**
-     * Stand-alone entry until the root command registers {@code bench}:
-     * {@code java -cp sheetwright.jar dev.sheetwright.cli.BenchCommand strip FILE.json --time 10}.
-     */
-    public static void main(String[] args) {
-        System.exit(new CommandLine(new BenchCommand()).execute(args));
-    }
 }
