@@ -3,8 +3,8 @@ package dev.sheetwright.cli;
 import dev.sheetwright.inventory.RemnantConflictException;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
-import picocli.CommandLine;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine;
 
 /** The exit codes, and the one place where exceptions become them. */
 public final class ExitCodes {
@@ -19,9 +19,9 @@ public final class ExitCodes {
     public static final int UNPLACED = 3;
 
     /** For {@code exitCodeList} in command annotations. */
-    static final String LIST_OK = "0:done";
-    static final String LIST_FAILURE = "1:unexpected failure";
-    static final String LIST_BAD_INPUT = "2:bad input (nothing changed)";
+    public static final String LIST_OK = "0:done";
+    public static final String LIST_FAILURE = "1:unexpected failure";
+    public static final String LIST_BAD_INPUT = "2:bad input (nothing changed)";
 
     private ExitCodes() {
     }

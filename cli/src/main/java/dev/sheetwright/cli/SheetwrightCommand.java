@@ -1,9 +1,15 @@
 package dev.sheetwright.cli;
 
-import picocli.CommandLine;
+import dev.sheetwright.cli.command.BenchCommand;
+import dev.sheetwright.cli.command.CommitCommand;
+import dev.sheetwright.cli.command.DevelopCommand;
+import dev.sheetwright.cli.command.NestCommand;
+import dev.sheetwright.cli.command.QuoteCommand;
+import dev.sheetwright.cli.command.RemnantCommand;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Spec;
+import picocli.CommandLine;
 
 /** The root command: groups the subcommands and prints usage when run alone. */
 @Command(name = "sheetwright", mixinStandardHelpOptions = true, versionProvider = ManifestVersion.class,

@@ -1,23 +1,23 @@
 package dev.sheetwright.cli;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.sheetwright.cli.command.BenchCommand;
+import dev.sheetwright.dxf.DxfCheck;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
+import java.util.List;
+import java.util.Map;
 import org.junit.jupiter.api.Assertions;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
-import picocli.CommandLine;
-import dev.sheetwright.dxf.DxfCheck;
-import java.util.List;
-import java.util.Map;
 import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /** End-to-end run of 'bench strip' on the fu instance (Fujita et al. 1993, from the shared benchmark folder). */
 class BenchStripCommandTest {
@@ -78,6 +78,6 @@ class BenchStripCommandTest {
         cl.setErr(new PrintWriter(err));
         int code = cl.execute("strip", "x.json", "--time", "-1");
         assertEquals(2, code);
-        assertTrue(err.toString().contains("--time must be a number of seconds >= 0, got -1.0"), err.toString());
+        assertTrue(err.toString().contains("--time must be from 0 to 86400 seconds, got -1.0"), err.toString());
     }
 }

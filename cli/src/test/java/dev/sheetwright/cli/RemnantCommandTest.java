@@ -1,10 +1,8 @@
 package dev.sheetwright.cli;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.sheetwright.cli.command.RemnantCommand;
 import dev.sheetwright.inventory.RemnantFilter;
 import dev.sheetwright.inventory.RemnantSort;
 import dev.sheetwright.inventory.RemnantStore;
@@ -17,6 +15,9 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import picocli.CommandLine;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 class RemnantCommandTest {
     private static final double EPS = 1e-9;

@@ -1,8 +1,8 @@
 package dev.sheetwright.cli.output;
 
 import dev.sheetwright.cli.Cautions;
-import dev.sheetwright.cli.JobNest;
-import dev.sheetwright.cli.RackPlan;
+import dev.sheetwright.cli.rack.RackPlan;
+import dev.sheetwright.cli.run.JobNest;
 import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.Offcut;
 import dev.sheetwright.nest.model.Placement;

@@ -1,8 +1,8 @@
 package dev.sheetwright.cli.output;
 
 import dev.sheetwright.core.develop.LayoutTable;
-import dev.sheetwright.dxf.BulgeArc;
 import dev.sheetwright.dxf.Bounds;
+import dev.sheetwright.dxf.BulgeArc;
 import dev.sheetwright.dxf.Drawing;
 import dev.sheetwright.dxf.Line;
 import dev.sheetwright.dxf.Polyline;

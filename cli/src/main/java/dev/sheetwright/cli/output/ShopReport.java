@@ -1,8 +1,8 @@
 package dev.sheetwright.cli.output;
 
 import dev.sheetwright.cli.Cautions;
-import dev.sheetwright.cli.JobNest;
-import dev.sheetwright.cli.JobQuote;
+import dev.sheetwright.cli.run.JobNest;
+import dev.sheetwright.cli.run.JobQuote;
 import dev.sheetwright.core.develop.DevelopedPiece;
 import dev.sheetwright.core.develop.Development;
 import dev.sheetwright.core.develop.LayoutTable;

@@ -1,5 +1,10 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
+import dev.sheetwright.cli.ExitCodes;
+import dev.sheetwright.cli.mixin.InventoryOption;
+import dev.sheetwright.cli.rack.PlanReport;
+import dev.sheetwright.cli.rack.RackCommit;
+import dev.sheetwright.cli.rack.RackPlan;
 import dev.sheetwright.inventory.RemnantStore;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;

@@ -1,5 +1,6 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
+import dev.sheetwright.cli.ExitCodes;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.HelpCommand;

@@ -1,10 +1,10 @@
-package dev.sheetwright.cli;
-
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertThrows;
+package dev.sheetwright.cli.output;
 
 import dev.sheetwright.core.units.LengthUnit;
 import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 
 class SizeFormatTest {
     private static final double EPS = 1e-9;

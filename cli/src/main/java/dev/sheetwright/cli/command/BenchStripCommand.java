@@ -1,19 +1,8 @@
-package dev.sheetwright.cli;
-
-import java.nio.file.Path;
-import java.time.Duration;
-import java.util.LinkedHashMap;
-import java.util.Map;
-import java.util.OptionalLong;
-import java.util.concurrent.Callable;
+package dev.sheetwright.cli.command;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import picocli.CommandLine;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
-
+import dev.sheetwright.cli.mixin.SearchOptions;
 import dev.sheetwright.cli.output.PatternDrawings;
 import dev.sheetwright.dxf.Drawing;
 import dev.sheetwright.dxf.DxfWriter;
@@ -21,13 +10,23 @@ import dev.sheetwright.dxf.Polyline;
 import dev.sheetwright.dxf.Shape;
 import dev.sheetwright.dxf.Vertex;
 import dev.sheetwright.nest.bench.StripInstance;
-import dev.sheetwright.nest.model.Placement;
-import java.util.ArrayList;
-import java.util.List;
 import dev.sheetwright.nest.bench.StripPacker;
 import dev.sheetwright.nest.check.NestChecker;
 import dev.sheetwright.nest.model.NestOptions;
+import dev.sheetwright.nest.model.Placement;
 import dev.sheetwright.nest.model.ProgressListener;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalLong;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /**
  * Packs one strip instance and prints one JSON line: instance, pieces, length, density, seconds, and violations (what
@@ -36,38 +35,25 @@ import dev.sheetwright.nest.model.ProgressListener;
 @Command(name = "strip", mixinStandardHelpOptions = true,
         description = "Pack a strip-packing instance (fixed height, shortest length) and print one JSON line.")
 public final class BenchStripCommand implements Callable<Integer> {
+    /** Search seconds without {@code --time}. */
+    static final double DEFAULT_SECONDS = 10;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Parameters(index = "0", paramLabel = "FILE.json", description = "Instance file (name, stripHeight, allowedRotationsDeg, items).")
     Path file;
 
-    @Option(names = "--time", paramLabel = "S", defaultValue = "10", description = "Search time in seconds (default ${DEFAULT-VALUE}).")
-    double seconds;
-
-    @Option(names = "--seed", paramLabel = "N", defaultValue = "1", description = "Random seed (default ${DEFAULT-VALUE}).")
-    long seed;
-
-    @Option(names = "--iterations", paramLabel = "N", description = "Run exactly N search steps instead of a time (reproducible).")
-    Long iterations;
-
-    @Option(names = "--threads", paramLabel = "N", defaultValue = "2", description = "Search threads (default ${DEFAULT-VALUE}).")
-    int threads;
+    @CommandLine.Mixin
+    SearchOptions search;
 
     @Option(names = "--dxf", paramLabel = "OUT.dxf", description = "Also write the layout as DXF (CUT: parts, SHEET: strip).")
     Path dxf;
 
     @Override
     public Integer call() throws JsonProcessingException {
-        if (!(seconds >= 0) || Double.isInfinite(seconds)) {
-            throw new CommandLine.ParameterException(spec.commandLine(), "--time must be a number of seconds >= 0, got " + seconds);
-        }
-        if (iterations != null && iterations < 0) {
-            throw new CommandLine.ParameterException(spec.commandLine(), "--iterations must be >= 0, got " + iterations);
-        }
+        NestOptions options = search.nestOptions(DEFAULT_SECONDS, ProgressListener.NONE);
         StripInstance instance = StripInstance.read(file);
-        NestOptions options = new NestOptions(Duration.ofMillis(Math.round(seconds * 1000)),
-                iterations == null ? OptionalLong.empty() : OptionalLong.of(iterations), seed, threads, ProgressListener.NONE);
         StripPacker.StripResult r = StripPacker.pack(instance, options);
         int violations = NestChecker.check(instance.toRequest(), r.nest()).size();
         Map<String, Object> line = new LinkedHashMap<>();

@@ -1,11 +1,11 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.run;
 
 import dev.sheetwright.nest.model.ProgressListener;
 import java.io.PrintWriter;
 import java.util.Locale;
 
 /** A one-line progress display on stderr, shown only when stderr is a terminal. */
-final class Progress implements ProgressListener {
+public final class Progress implements ProgressListener {
 
     private final PrintWriter err;
     private final boolean show;
@@ -19,7 +19,7 @@ final class Progress implements ProgressListener {
         this.budget = budgetSeconds;
     }
 
-    static Progress forTerminal(PrintWriter err, double budgetSeconds) {
+    public static Progress forTerminal(PrintWriter err, double budgetSeconds) {
         return new Progress(err, System.console() != null, budgetSeconds);
     }
 
@@ -37,7 +37,7 @@ final class Progress implements ProgressListener {
         drawn = true;
     }
 
-    synchronized void done() {
+    public synchronized void done() {
         if (drawn) {
             err.print("\r" + " ".repeat(90) + "\r");
             err.flush();

@@ -1,6 +1,7 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.run;
 
 import dev.sheetwright.cli.job.JobFileException;
+import dev.sheetwright.cli.job.JobReader;
 import dev.sheetwright.core.develop.DevelopContext;
 import dev.sheetwright.core.develop.Developers;
 import dev.sheetwright.core.develop.Development;

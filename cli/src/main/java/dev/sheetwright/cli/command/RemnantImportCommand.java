@@ -1,4 +1,4 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
 import dev.sheetwright.inventory.Remnant;
 import java.io.PrintWriter;

@@ -1,4 +1,4 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.run;
 
 import dev.sheetwright.core.cutting.CutChart;
 import dev.sheetwright.core.develop.Development;

@@ -1,4 +1,4 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.run;
 
 import dev.sheetwright.cli.job.JobReader;
 import dev.sheetwright.cli.output.JsonFiles;

@@ -1,6 +1,8 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
 import dev.sheetwright.cli.mixin.UnitsOption;
+import dev.sheetwright.cli.output.SizeFormat;
+import dev.sheetwright.cli.output.SizeText;
 import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.inventory.DxfOutline;
 import dev.sheetwright.inventory.NewRemnant;

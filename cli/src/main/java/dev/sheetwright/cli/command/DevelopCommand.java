@@ -1,11 +1,14 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
+import dev.sheetwright.cli.Cautions;
+import dev.sheetwright.cli.ExitCodes;
 import dev.sheetwright.cli.mixin.JobFileOption;
 import dev.sheetwright.cli.output.JsonFiles;
 import dev.sheetwright.cli.output.LayoutText;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.PatternDrawings;
 import dev.sheetwright.cli.output.PatternsJson;
+import dev.sheetwright.cli.run.JobDevelopment;
 import dev.sheetwright.core.develop.DevelopedPiece;
 import dev.sheetwright.core.develop.Development;
 import dev.sheetwright.core.develop.LayoutTable;

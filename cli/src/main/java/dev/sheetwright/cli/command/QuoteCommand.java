@@ -1,23 +1,26 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
+import dev.sheetwright.cli.Cautions;
+import dev.sheetwright.cli.ExitCodes;
 import dev.sheetwright.cli.mixin.JobFileOption;
+import dev.sheetwright.cli.mixin.SearchOptions;
 import dev.sheetwright.cli.mixin.ShopOption;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.QuoteText;
+import dev.sheetwright.cli.run.JobNest;
+import dev.sheetwright.cli.run.Progress;
+import dev.sheetwright.cli.run.QuoteFiles;
 import dev.sheetwright.core.job.Job;
 import dev.sheetwright.core.quote.Quote;
 import dev.sheetwright.core.quote.ShopSettings;
 import dev.sheetwright.nest.model.NestOptions;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.Duration;
-import java.util.OptionalLong;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** {@code sheetwright quote JOB.yaml}: a quick nest, then the material and cutting quote as a table. */
@@ -26,6 +29,9 @@ import picocli.CommandLine.Spec;
                 + " pierces, cut time and cost, each rate with its source. With -o, also write quote.json,"
                 + " quote.csv, report.html and report.pdf.")
 public final class QuoteCommand implements Callable<Integer> {
+
+    /** Search seconds without {@code --time}: a quote is a quick nest. */
+    static final double DEFAULT_SECONDS = 2;
 
     @Spec
     CommandSpec spec;
@@ -36,27 +42,20 @@ public final class QuoteCommand implements Callable<Integer> {
     @Option(names = {"-o", "--out"}, paramLabel = "OUT", description = "also write the quote files and report here")
     Path out;
 
-    @Option(names = "--time", defaultValue = "2", paramLabel = "S",
-            description = "seconds the nest search may run (default ${DEFAULT-VALUE})")
-    double seconds;
-
-    @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "search seed (default ${DEFAULT-VALUE})")
-    long seed;
+    @Mixin
+    SearchOptions search;
 
     @Mixin
     ShopOption shop;
 
     @Override
     public Integer call() {
-        if (!(seconds >= 0) || seconds > 86400) {
-            throw new ParameterException(spec.commandLine(), "--time must be from 0 to 86400 seconds, got " + seconds);
-        }
+        double seconds = search.seconds(DEFAULT_SECONDS);
         Job job = jobFile.read();
         ShopSettings settings = shop.settings();
         PrintWriter err = spec.commandLine().getErr();
         Progress progress = Progress.forTerminal(err, seconds);
-        NestOptions options = new NestOptions(Duration.ofMillis((long) (seconds * 1000)), OptionalLong.empty(), seed, 2,
-                progress);
+        NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
         JobNest nest = JobNest.run(job, jobFile.label(), options);
         progress.done();
         Quote q;

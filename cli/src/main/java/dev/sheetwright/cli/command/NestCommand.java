@@ -1,6 +1,11 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
+import dev.sheetwright.cli.Cautions;
+import dev.sheetwright.cli.ExitCodes;
+import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.mixin.JobFileOption;
+import dev.sheetwright.cli.mixin.SearchOptions;
+import dev.sheetwright.cli.mixin.ShopOption;
 import dev.sheetwright.cli.output.JsonFiles;
 import dev.sheetwright.cli.output.NestJson;
 import dev.sheetwright.cli.output.OutputFolder;
@@ -8,20 +13,27 @@ import dev.sheetwright.cli.output.PatternDrawings;
 import dev.sheetwright.cli.output.PatternsJson;
 import dev.sheetwright.cli.output.QuoteText;
 import dev.sheetwright.cli.output.SheetDrawings;
+import dev.sheetwright.cli.rack.MinOffcut;
+import dev.sheetwright.cli.rack.PlanReport;
+import dev.sheetwright.cli.rack.RackCommit;
+import dev.sheetwright.cli.rack.RackPlan;
+import dev.sheetwright.cli.rack.RackPlanning;
+import dev.sheetwright.cli.run.JobNest;
+import dev.sheetwright.cli.run.Progress;
+import dev.sheetwright.cli.run.QuoteFiles;
 import dev.sheetwright.core.job.Job;
+import dev.sheetwright.core.job.StockRemnant;
 import dev.sheetwright.core.quote.Quote;
 import dev.sheetwright.dxf.Drawing;
 import dev.sheetwright.dxf.DxfWriter;
 import dev.sheetwright.nest.model.NestOptions;
 import dev.sheetwright.nest.model.SheetLayout;
 import dev.sheetwright.nest.model.Unplaced;
-import dev.sheetwright.cli.mixin.InventoryOption;
-import dev.sheetwright.core.job.StockRemnant;
 import java.io.PrintWriter;
-import java.util.ArrayList;
-import java.util.List;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
@@ -37,6 +49,9 @@ import picocli.CommandLine.Spec;
                 + " preview per sheet, nest.json and patterns.json. Exit 3 when some pieces could not be placed.")
 public final class NestCommand implements Callable<Integer> {
 
+    /** Search seconds without {@code --time}. */
+    static final double DEFAULT_SECONDS = 10;
+
     @Spec
     CommandSpec spec;
 
@@ -46,16 +61,8 @@ public final class NestCommand implements Callable<Integer> {
     @Option(names = {"-o", "--out"}, required = true, paramLabel = "OUT", description = "output folder")
     Path out;
 
-    @Option(names = "--time", defaultValue = "10", paramLabel = "S",
-            description = "seconds the improvement search may run (default ${DEFAULT-VALUE})")
-    double seconds;
-
-    @Option(names = "--iterations", paramLabel = "N",
-            description = "run exactly N search steps instead of a time limit (reproducible nests)")
-    Long iterations;
-
-    @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "search seed (default ${DEFAULT-VALUE})")
-    long seed;
+    @Mixin
+    SearchOptions search;
 
     @Option(names = "--use-remnants",
             description = "cut from the rack first: every available remnant of the job's material and gauge (or"
@@ -97,10 +104,7 @@ public final class NestCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (!(seconds >= 0) || seconds > 86400) {
-            throw new picocli.CommandLine.ParameterException(spec.commandLine(),
-                    "--time must be from 0 to 86400 seconds, got " + seconds);
-        }
+        double seconds = search.seconds(DEFAULT_SECONDS);
         if (reserveMinutes < 1 || reserveMinutes > 24 * 60) {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(),
                     "--reserve-minutes must be from 1 to 1440, got " + reserveMinutes);
@@ -112,10 +116,7 @@ public final class NestCommand implements Callable<Integer> {
         boolean planned = useRemnants || !remnantIds.isEmpty() || commitNow || inventory.given();
         PrintWriter err = spec.commandLine().getErr();
         Progress progress = Progress.forTerminal(err, seconds);
-        NestOptions options = iterations != null
-                ? new NestOptions(Duration.ofDays(1), java.util.OptionalLong.of(iterations), seed, 2, progress)
-                : new NestOptions(Duration.ofMillis((long) (seconds * 1000)), java.util.OptionalLong.empty(), seed, 2,
-                        progress);
+        NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
         long start = System.nanoTime();
         try (RackPlanning rack = planned
                 ? RackPlanning.open(inventory.file(), job, Duration.ofMinutes(reserveMinutes)) : null) {

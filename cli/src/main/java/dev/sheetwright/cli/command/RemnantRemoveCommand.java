@@ -1,4 +1,4 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
 import java.io.PrintWriter;
 import java.util.List;

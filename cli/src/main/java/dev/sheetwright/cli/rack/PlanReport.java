@@ -1,4 +1,4 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.rack;
 
 import dev.sheetwright.inventory.Remnant;
 import java.io.PrintWriter;
@@ -7,12 +7,12 @@ import java.util.List;
 import java.util.Locale;
 
 /** The terminal lines about a rack plan: what it holds, and what a commit recorded. */
-final class PlanReport {
+public final class PlanReport {
 
     private PlanReport() {
     }
 
-    static void planned(PrintWriter w, RackPlan plan, Path out) {
+    public static void planned(PrintWriter w, RackPlan plan, Path out) {
         String u = plan.unit().symbol();
         w.printf(Locale.ROOT, "plan %s (%s): remnants cut %s, held until %s%n", plan.id(), plan.inventory(),
                 plan.remnantsUsed().isEmpty() ? "none" : String.join(", ", plan.remnantsUsed()), plan.reservedUntil());
@@ -24,7 +24,7 @@ final class PlanReport {
         w.flush();
     }
 
-    static void committed(PrintWriter w, RackPlan plan, List<Remnant> added) {
+    public static void committed(PrintWriter w, RackPlan plan, List<Remnant> added) {
         w.printf(Locale.ROOT, "committed plan %s: used %s; recorded %s%n", plan.id(),
                 plan.remnantsUsed().isEmpty() ? "no remnant" : String.join(", ", plan.remnantsUsed()),
                 added.isEmpty() ? "no offcut" : String.join(", ", added.stream().map(r -> r.id()

@@ -1,8 +1,9 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import dev.sheetwright.cli.mixin.UnitsOption;
+import dev.sheetwright.cli.output.SizeFormat;
 import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.material.UnitFactors;
 import dev.sheetwright.core.units.FractionFormat;

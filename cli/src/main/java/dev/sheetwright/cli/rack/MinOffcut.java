@@ -1,4 +1,4 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.rack;
 
 import dev.sheetwright.core.units.LengthUnit;
 import dev.sheetwright.nest.model.Offcut;

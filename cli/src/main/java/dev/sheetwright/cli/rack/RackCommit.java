@@ -1,4 +1,4 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.rack;
 
 import dev.sheetwright.inventory.NewRemnant;
 import dev.sheetwright.inventory.Remnant;
@@ -10,7 +10,7 @@ import java.util.List;
 import java.util.Map;
 
 /** Commits a planned nest to the rack: the remnants it cut become used, its offcuts are recorded, all at once. */
-final class RackCommit {
+public final class RackCommit {
 
     private RackCommit() {
     }
@@ -24,7 +24,7 @@ final class RackCommit {
      * @throws dev.sheetwright.inventory.RemnantConflictException if it was committed before, or a remnant it cuts
      *                                                            was taken by another plan after its reservation ran out
      */
-    static List<Remnant> commit(RemnantStore store, RackPlan plan, String location) {
+    public static List<Remnant> commit(RemnantStore store, RackPlan plan, String location) {
         Map<String, NewRemnant> offcuts = new LinkedHashMap<>();
         for (RackPlan.PlannedOffcut o : plan.offcuts()) {
             RemnantOutline outline = RemnantOutline.rectangle(plan.unit().toMm(o.width()),

@@ -1,16 +1,16 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.output;
 
-import dev.sheetwright.core.units.Lengths;
 import dev.sheetwright.core.units.LengthUnit;
+import dev.sheetwright.core.units.Lengths;
 import java.util.Locale;
 
 /** Reads sizes typed on the command line (the engine only takes millimetres). Package-private. */
-final class SizeText {
+public final class SizeText {
     private SizeText() {
     }
 
     /** {@code "48x30"} or {@code "47 15/16 x 30"} in {@code unit} → {width, height} in mm. */
-    static double[] parseSize(String text, LengthUnit unit) {
+    public static double[] parseSize(String text, LengthUnit unit) {
         String[] parts = Lengths.sizeParts(text);
         if (parts == null) {
             throw new IllegalArgumentException("--size: '" + text + "' is not a size; write WIDTHxHEIGHT, e.g. 48x30");
@@ -19,7 +19,7 @@ final class SizeText {
     }
 
     /** {@code "0.8"} in {@code unit}, or with its own unit: {@code "0.8mm"}, {@code "0.031in"} → mm. */
-    static double parseLength(String option, String text, LengthUnit unit) {
+    public static double parseLength(String option, String text, LengthUnit unit) {
         String t = text.strip().toLowerCase(Locale.ROOT);
         if (t.endsWith("mm")) {
             return number(option, text, t.substring(0, t.length() - 2));

@@ -1,5 +1,7 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.rack;
 
+import dev.sheetwright.cli.mixin.InventoryOption;
+import dev.sheetwright.cli.run.JobNest;
 import dev.sheetwright.core.geom.Point2;
 import dev.sheetwright.core.job.Job;
 import dev.sheetwright.core.job.StockRemnant;
@@ -29,7 +31,7 @@ import java.util.UUID;
  * the sheets now); {@link #close} hands everything back if the plan was not settled. Nothing else is changed in
  * the inventory until the plan is committed ({@link RackCommit}).
  */
-final class RackPlanning implements AutoCloseable {
+public final class RackPlanning implements AutoCloseable {
 
     private final RemnantStore store;
     private final Job job;
@@ -45,7 +47,7 @@ final class RackPlanning implements AutoCloseable {
     }
 
     /** Opens the inventory {@code file}, which must exist, for a new plan of {@code job}. */
-    static RackPlanning open(Path file, Job job, Duration ttl) {
+    public static RackPlanning open(Path file, Job job, Duration ttl) {
         return new RackPlanning(dev.sheetwright.cli.mixin.InventoryOption.openExisting(file), job, ttl);
     }
 
@@ -53,7 +55,7 @@ final class RackPlanning implements AutoCloseable {
         return planId;
     }
 
-    RemnantStore store() {
+    public RemnantStore store() {
         return store;
     }
 
@@ -65,7 +67,7 @@ final class RackPlanning implements AutoCloseable {
      * @throws IllegalArgumentException if an id is unknown or its material does not match the job
      * @throws dev.sheetwright.inventory.RemnantConflictException if a named remnant is used or held by another plan
      */
-    List<StockRemnant> reserve(boolean all, List<String> ids) {
+    public List<StockRemnant> reserve(boolean all, List<String> ids) {
         for (String id : ids) {
             Remnant r = store.get(id).orElseThrow(() -> new IllegalArgumentException("--remnant " + id
                     + ": no such remnant in " + store.file()));
@@ -98,7 +100,7 @@ final class RackPlanning implements AutoCloseable {
      * Keeps the rack remnants {@code nest} cuts, hands back the others and takes an id for each clean offcut at
      * least {@code min}, all in one inventory transaction.
      */
-    RackPlan settle(JobNest nest, MinOffcut min) {
+    public RackPlan settle(JobNest nest, MinOffcut min) {
         Set<String> used = new LinkedHashSet<>();
         List<SheetLayout> withOffcut = new ArrayList<>();
         for (SheetLayout s : nest.result().sheets()) {
@@ -124,7 +126,7 @@ final class RackPlanning implements AutoCloseable {
     }
 
     /** Hands back every remnant this plan holds (after a failure); the ids it took stay unused. */
-    void abandon() {
+    public void abandon() {
         store.release(planId);
     }
 

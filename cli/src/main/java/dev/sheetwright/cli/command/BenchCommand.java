@@ -1,7 +1,7 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine;
 
 /** Groups the benchmark subcommands; prints usage when run alone. */
 @Command(name = "bench", mixinStandardHelpOptions = true,

@@ -1,5 +1,6 @@
-package dev.sheetwright.cli;
+package dev.sheetwright.cli.command;
 
+import dev.sheetwright.cli.ExitCodes;
 import dev.sheetwright.cli.mixin.InventoryOption;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
@@ -15,7 +16,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(mixinStandardHelpOptions = true, exitCodeListHeading = "Exit codes:%n",
         exitCodeList = {ExitCodes.LIST_OK, ExitCodes.LIST_FAILURE, ExitCodes.LIST_BAD_INPUT})
-abstract class RemnantSubcommand implements Callable<Integer> {
+public abstract class RemnantSubcommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
