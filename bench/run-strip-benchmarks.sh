@@ -37,13 +37,23 @@ done
 
 run=("$java" -jar "$jar" bench strip)
 
-# Best checked published density per instance: section A of $dir/README.md ("best checked published density";
-# beam search, Bennell & Song 2010, or SAHA/GLSHA, Gomes & Oliveira 2006). dagli and swim use the value recomputed
-# with this file's polygons. jakobs1/jakobs2 have none in section A.
-declare -A best=(
-  [albano]=0.8788 [dagli]=0.8774 [fu]=0.9096 [mao]=0.8101 [marques]=0.8892
-  [shapes0]=0.6650 [shirts]=0.8804 [swim]=0.7503 [trousers]=0.9038
-)
+# The 2025 record density per instance, read at run time from section B2 of $dir/README.md (the table of
+# "2025 record density" rows: | name | 89.821 % | name | 92.015 % |); nothing of it is kept in this project.
+declare -A best=()
+while read -r name value; do
+  best[$name]="$value"
+done < <(awk '
+  /^### B2/ { inb2 = 1; next }
+  /^### / && inb2 { inb2 = 0 }
+  inb2 && /^\|/ {
+    n = split($0, c, "|")
+    for (i = 2; i + 1 <= n; i += 2) {
+      name = c[i]; val = c[i + 1]
+      gsub(/[ \t]/, "", name); gsub(/[ \t%]/, "", val)
+      if (name != "" && name != "name" && val ~ /^[0-9.]+$/) printf "%s %.5f\n", name, val / 100
+    }
+  }' "$dir/README.md")
+[ "${#best[@]}" -gt 0 ] || echo "warning: no 2025 record densities found in $dir/README.md (section B2)" >&2
 
 IFS=',' read -r -a tlist <<< "$times"
 tmp="$(mktemp)"
@@ -71,13 +81,13 @@ done
   echo
   echo "Run $(date -u +%Y-%m-%dT%H:%MZ) on $(nproc) cores (load average at end: $(cut -d' ' -f1-3 /proc/loadavg)), seed $seed,"
   echo "with \`${run[*]} FILE --time S\`. Density = item area / (strip height x length). 'viol.' = violations found by"
-  echo "NestChecker (0 = valid layout). Best published density: section A of the benchmark folder's README.md"
-  echo "(best checked published value per instance)."
+  echo "NestChecker (0 = valid layout). Ratio = density / the 2025 record density (section B2 of the benchmark"
+  echo "folder's README.md, read at run time)."
   echo
   header="| instance | pieces"
   sep="| --- | ---:"
   for t in "${tlist[@]}"; do header="$header | density ${t}s | viol. | ratio ${t}s"; sep="$sep | ---: | ---: | ---:"; done
-  echo "$header | best published |"
+  echo "$header | 2025 record |"
   echo "$sep | ---: |"
   declare -A sum cnt
   worst=()
@@ -101,7 +111,7 @@ done
   echo
   for i in "${!tlist[@]}"; do
     if [ "${cnt[$i]:-0}" -gt 0 ]; then
-      echo "- ${tlist[$i]} s: mean ratio to best published $(awk -v s="${sum[$i]}" -v c="${cnt[$i]}" 'BEGIN{printf "%.3f", s/c}') over ${cnt[$i]} instances, lowest ${worst[$i]}"
+      echo "- ${tlist[$i]} s: mean ratio to the 2025 record $(awk -v s="${sum[$i]}" -v c="${cnt[$i]}" 'BEGIN{printf "%.3f", s/c}') over ${cnt[$i]} instances, lowest ${worst[$i]}"
     fi
   done
 } > "$out"
