@@ -51,6 +51,7 @@ public final class DevelopCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         FractionFormat fractions = new FractionFormat(fraction);
+        OutputFolder.check(out);
         Job job = jobFile.read();
         List<Development> developments = JobDevelopment.developAll(job, jobFile.label());
         try (OutputFolder folder = OutputFolder.stage(out)) {
