@@ -14,9 +14,6 @@ import dev.sheetwright.core.material.Material;
 import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.quote.QuoteTerms;
 import dev.sheetwright.core.units.LengthUnit;
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -25,9 +22,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import org.snakeyaml.engine.v2.api.Load;
-import org.snakeyaml.engine.v2.api.LoadSettings;
-import org.snakeyaml.engine.v2.exceptions.YamlEngineException;
 
 /**
  * Reads a job file (YAML, version 1) into a {@link Job}. The YAML engine builds only plain maps, lists, strings,
@@ -59,13 +53,7 @@ public final class JobReader {
 
     /** Reads the job and its {@code quote:} section (or {@link QuoteTerms#NONE} when there is none). */
     public static JobFile readFull(Path path) {
-        String text;
-        try {
-            text = Files.readString(path, StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new JobFileException(path.toString(), null, null, "cannot read the job file: " + e.getMessage());
-        }
-        return parseFull(text, path.toString());
+        return fromDocument(YamlDocument.read(path, "job file"), path.toString());
     }
 
     public static Job parse(String text, String fileLabel) {
@@ -73,14 +61,10 @@ public final class JobReader {
     }
 
     public static JobFile parseFull(String text, String file) {
-        Object doc;
-        try {
-            LoadSettings settings = LoadSettings.builder().setLabel(file).setAllowDuplicateKeys(false)
-                    .setMaxAliasesForCollections(10).build();
-            doc = new Load(settings).loadFromString(text);
-        } catch (YamlEngineException e) {
-            throw new JobFileException(file, null, null, "not valid YAML: " + e.getMessage().replace('\n', ' '));
-        }
+        return fromDocument(YamlDocument.load(text, file), file);
+    }
+
+    private static JobFile fromDocument(Object doc, String file) {
         Fields top = Fields.root(file, doc);
         top.allowOnly(TOP);
         if (top.has("version") && top.integer("version", 1, 1, 1) != 1) {
