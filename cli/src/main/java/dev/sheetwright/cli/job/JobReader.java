@@ -9,7 +9,11 @@ import dev.sheetwright.core.fitting.FittingSpec;
 import dev.sheetwright.core.geom.Tolerance;
 import dev.sheetwright.core.job.CuttingRules;
 import dev.sheetwright.core.job.Job;
+import dev.sheetwright.core.job.ShopDefaults;
+import dev.sheetwright.core.geom.Point2;
 import dev.sheetwright.core.job.Stock;
+import dev.sheetwright.core.job.StockRemnant;
+import dev.sheetwright.core.job.StockSheet;
 import dev.sheetwright.core.material.Material;
 import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.quote.QuoteTerms;
@@ -103,9 +107,11 @@ public final class JobReader {
             }
             tolerance = tolerance.withChord(chord);
         }
+        Fields sized = top.withLargest(ShopDefaults.largestLength(unit), ShopDefaults.largestLength(unit) + " "
+                + unit.symbol() + " (a sanity bound)");
         List<FittingSpec> fittings = new ArrayList<>();
         Set<String> ids = new HashSet<>();
-        for (Fields f : top.listOfMaps("fittings")) {
+        for (Fields f : sized.listOfMaps("fittings")) {
             FittingSpec spec = fitting(f, defaults);
             if (!ids.add(spec.id())) {
                 throw new JobFileException(file, spec.id(), "id", "is used by two fittings; ids must be unique");
@@ -115,10 +121,47 @@ public final class JobReader {
         if (fittings.isEmpty()) {
             throw top.error("fittings", "lists no fittings");
         }
-        CuttingRules cutting = CuttingReader.read(top.has("cutting") ? top.map("cutting") : null, unit);
+        CuttingRules cutting = CuttingReader.read(top.has("cutting") ? sized.map("cutting") : null, unit);
         Stock stock = StockReader.read(top.has("stock") ? top.map("stock") : null, unit);
+        refuseMarginWithoutRoom(cutting, stock, file, unit, top.has("cutting") && top.map("cutting").has("margin"));
         QuoteTerms quote = top.has("quote") ? QuoteSectionReader.read(top.map("quote"), unit) : QuoteTerms.NONE;
         return new JobFile(new Job(name, unit, material, face, fittings, cutting, stock, tolerance), quote);
+    }
+
+    /**
+     * A sheet-edge margin of half the stock's shorter side or more leaves no room for any part: that is bad input,
+     * not an unplaced piece. Checked for every sheet size, remnant (its outline's box) and the coil width.
+     */
+    private static void refuseMarginWithoutRoom(CuttingRules cutting, Stock stock, String file, LengthUnit unit,
+            boolean given) {
+        double margin = cutting.margin();
+        List<String[]> sides = new ArrayList<>(); // {name, shorter side}
+        for (StockSheet sh : stock.sheets()) {
+            sides.add(new String[] {"sheet " + sh.name(), String.valueOf(Math.min(sh.width(), sh.length()))});
+        }
+        for (StockRemnant r : stock.remnants()) {
+            double minX = Double.POSITIVE_INFINITY;
+            double maxX = Double.NEGATIVE_INFINITY;
+            double minY = Double.POSITIVE_INFINITY;
+            double maxY = Double.NEGATIVE_INFINITY;
+            for (Point2 p : r.outline()) {
+                minX = Math.min(minX, p.x());
+                maxX = Math.max(maxX, p.x());
+                minY = Math.min(minY, p.y());
+                maxY = Math.max(maxY, p.y());
+            }
+            sides.add(new String[] {"remnant " + r.id(), String.valueOf(Math.min(maxX - minX, maxY - minY))});
+        }
+        stock.coil().ifPresent(c -> sides.add(new String[] {"the coil", String.valueOf(c.width())}));
+        for (String[] side : sides) {
+            double shorter = Double.parseDouble(side[1]);
+            if (2 * margin >= shorter) {
+                throw new JobFileException(file, null, "cutting.margin", (given ? "" : "the default ")
+                        + "margin " + margin + " " + unit.symbol() + " leaves no room on " + side[0]
+                        + " (shorter side " + shorter + " " + unit.symbol() + "); the margin must be less than half"
+                        + " of it, " + shorter / 2 + " " + unit.symbol());
+            }
+        }
     }
 
     private static Material material(Fields m, LengthUnit unit) {

@@ -43,6 +43,14 @@ public final class ShopDefaults {
                 : unit.convert(0.375, LengthUnit.INCH);
     }
 
+    /**
+     * The largest length a job file may give for a fitting, a stock size or a cutting rule: 1000 in or 25,000 mm
+     * (a sanity bound, common practice; well beyond any duct or sheet, far below sizes that break arithmetic).
+     */
+    public static double largestLength(LengthUnit unit) {
+        return unit == LengthUnit.INCH ? 1000 : 25000;
+    }
+
     /** The rules of a job without a {@code cutting:} section: plasma, its kerf, gap and margin, any rotation. */
     public static CuttingRules cutting(LengthUnit unit) {
         CuttingProcess p = CuttingProcess.PLASMA;
