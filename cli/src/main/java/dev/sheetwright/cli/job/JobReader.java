@@ -6,6 +6,7 @@ import dev.sheetwright.core.fitting.DimensionFace;
 import dev.sheetwright.core.fitting.EndAllowance;
 import dev.sheetwright.core.fitting.FittingException;
 import dev.sheetwright.core.fitting.FittingSpec;
+import dev.sheetwright.core.fitting.SeamAllowance;
 import dev.sheetwright.core.geom.Tolerance;
 import dev.sheetwright.core.job.CuttingRules;
 import dev.sheetwright.core.job.Job;
@@ -92,10 +93,15 @@ public final class JobReader {
             }
         }
         Allowances allowances = new Allowances(table.defaultSeam(), EndAllowance.NONE, EndAllowance.NONE, true);
+        SeamAllowance miter = table.defaultMiterSeam();
         if (top.has("allowances")) {
-            allowances = AllowanceReader.read(top.map("allowances"), allowances, table, "large", "small", false);
+            Fields a = top.map("allowances");
+            allowances = AllowanceReader.read(a, allowances, table, "large", "small", true);
+            if (a.has("miter")) {
+                miter = AllowanceReader.seam(a, "miter", table); // the job's default for elbows and offsets
+            }
         }
-        FittingDefaults defaults = new FittingDefaults(unit, table, allowances, table.defaultMiterSeam());
+        FittingDefaults defaults = new FittingDefaults(unit, table, allowances, miter);
         Tolerance tolerance = unit == LengthUnit.INCH ? Tolerance.INCH : Tolerance.MM;
         if (top.has("tolerance")) {
             Fields t = top.map("tolerance");
