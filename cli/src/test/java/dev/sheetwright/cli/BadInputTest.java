@@ -51,7 +51,29 @@ class BadInputTest {
                 Arguments.of(HEAD + "fittings:\n  - {id: P1, type: pipe, diameter: 8, length: 24}\n"
                         + "cutting: {kerf: 0.1, gap: 0.05}\n", "field 'cutting.gap'"),
                 Arguments.of(HEAD + "fittings:\n  - {id: P1, type: pipe, diameter: 8, length: 24}\n"
-                        + "stock: {sheets: [{size: 48 by 120}]}\n", "field 'stock.sheets[1].size'"));
+                        + "stock: {sheets: [{size: 48 by 120}]}\n", "field 'stock.sheets[1].size'"),
+                Arguments.of(HEAD + "fittings:\n  - {id: a/b, type: pipe, diameter: 8, length: 10}\n"
+                        + "  - {id: a-b, type: pipe, diameter: 6, length: 10}\n",
+                        "fitting 'a-b', field 'id': fittings 'a/b' and 'a-b' would both write parts/a-b_"),
+                Arguments.of(HEAD + "fittings:\n  - {id: E1, type: pipe, diameter: 8, length: 10}\n"
+                        + "  - {id: e1, type: pipe, diameter: 6, length: 10}\n",
+                        "fittings 'E1' and 'e1' would both write"),
+                Arguments.of(HEAD + "fittings:\n  - {id: P1, type: pipe, diameter: 1e308, length: 10}\n",
+                        "fitting 'P1', field 'diameter': must be at most 1000"),
+                Arguments.of(HEAD + "fittings:\n  - {id: R1, type: reducer, large: 12, small: 8, height: 10,"
+                        + " offset: {x: 1e300}}\n", "fitting 'R1', field 'offset.x': must be at most 1000"),
+                Arguments.of(HEAD + "fittings:\n  - {id: E1, type: elbow, diameter: 8, angle: 90, radius: 5e200}\n",
+                        "fitting 'E1', field 'radius': must be at most 1000"),
+                Arguments.of(HEAD + "fittings:\n  - {id: P1, type: pipe, diameter: 8, length: 24}\n"
+                        + "stock: {sheets: [{size: 48 x 1e308}]}\n", "field 'stock.sheets[1].size'"),
+                Arguments.of(HEAD + "fittings:\n  - {id: P1, type: pipe, diameter: 8, length: 24}\n"
+                        + "cutting: {kerf: 1e308}\n", "field 'cutting.kerf': must be at most 1000"),
+                Arguments.of(HEAD + "fittings:\n  - {id: P1, type: pipe, diameter: 8, length: 24}\n"
+                        + "cutting: {margin: 25}\n", "field 'cutting.margin': margin 25.0 in leaves no room on"
+                        + " sheet 48x120 (shorter side 48.0 in)"),
+                Arguments.of(HEAD + "fittings:\n  - {id: P1, type: pipe, diameter: 8, length: 24}\n"
+                        + "cutting: {margin: 2}\nstock: {sheets: [{size: 48x120}], coil: {width: 4}}\n",
+                        "field 'cutting.margin': margin 2.0 in leaves no room on the coil"));
     }
 
     @ParameterizedTest

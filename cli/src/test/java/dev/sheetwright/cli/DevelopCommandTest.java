@@ -76,7 +76,7 @@ class DevelopCommandTest {
                 assertEquals(1, piece.get("holes").asInt(), "the main of a tee carries the intersection hole");
             }
         }
-        assertEquals(java.util.Set.of("pipe", "reducer", "eccentric-reducer", "elbow", "offset", "tee", "lateral",
+        assertEquals(java.util.Set.of("pipe", "reducer", "eccentric-reducer", "cone", "elbow", "offset", "tee", "lateral",
                 "tap", "transition"), types);
     }
 

@@ -13,7 +13,7 @@ import java.util.List;
 import java.util.Set;
 
 /**
- * Writes DXF R12 (AC1009) text: HEADER, TABLES (LTYPE, LAYER, STYLE), an empty BLOCKS section, ENTITIES and EOF,
+ * Writes DXF R12 (AC1009) text: a 999 comment naming the drawing unit ({@link DrawingUnit#dxfComment()}), HEADER, TABLES (LTYPE, LAYER, STYLE), an empty BLOCKS section, ENTITIES and EOF,
  * without handles and without extrusion. Polylines become POLYLINE / VERTEX (group 42 = bulge when not 0) /
  * SEQEND, lines LINE, texts TEXT in style STANDARD.
  *
@@ -114,6 +114,7 @@ public final class DxfWriter implements Closeable {
             }
         }
 
+        pair(999, units.dxfComment()); // R12 has no unit header variable; the unit is said in a comment
         section("HEADER");
         variable("$ACADVER", 1, "AC1009");
         variable("$DWGCODEPAGE", 3, "ANSI_1252");
@@ -124,8 +125,6 @@ public final class DxfWriter implements Closeable {
         pointVariable("$LIMMAX", extents.maxX(), extents.maxY(), false);
         variable("$LUNITS", 70, "2"); // decimal display; R12 has no unit variable
         variable("$LUPREC", 70, "4");
-        variable("$INSUNITS", 70, Integer.toString(units.insUnits())); // later-release hints, read by
-        variable("$MEASUREMENT", 70, Integer.toString(units.measurement())); // many R12 readers anyway
         pair(0, "ENDSEC");
 
         section("TABLES");

@@ -58,7 +58,8 @@ class DxfWriterTest {
         // the top edge's arc rises 5 above the chord at y = 20 (sagitta = bulge x chord / 2, computed)
         String text = DxfWriter.toDxf(Fixtures.tiny());
         assertTrue(text.contains("$EXTMAX\r\n 10\r\n40\r\n 20\r\n25\r\n"), "true extents include the arc");
-        assertTrue(text.contains("$INSUNITS\r\n 70\r\n4\r\n"), "millimetre hint");
+        assertTrue(text.startsWith("999\r\ndrawing units: mm (1 unit = 1 millimetre)\r\n  0\r\nSECTION\r\n"),
+                "millimetres said in a comment");
     }
 
     @Test
@@ -84,11 +85,14 @@ class DxfWriterTest {
     }
 
     @Test
-    void write_inchDrawing_inchHints() {
+    void write_inchDrawing_unitInComment_noLaterReleaseVariables() {
         Drawing inches = Drawing.of("in", List.of(Fixtures.CUT), List.of(Fixtures.circle("CUT", 0, 0, 3)));
         String text = DxfWriter.toDxf(inches);
-        assertTrue(text.contains("$INSUNITS\r\n 70\r\n1\r\n"));
-        assertTrue(text.contains("$MEASUREMENT\r\n 70\r\n0\r\n"));
+        assertTrue(text.startsWith("999\r\ndrawing units: in (1 unit = 1 inch)\r\n"), "inches said in a comment");
+        assertEquals(DrawingUnit.INCH, DrawingUnit.fromDxfComment(text.split("\r\n")[1]));
+        // AC1009 has no $INSUNITS or $MEASUREMENT (they came with later releases)
+        assertFalse(text.contains("$INSUNITS"));
+        assertFalse(text.contains("$MEASUREMENT"));
     }
 
     @Test

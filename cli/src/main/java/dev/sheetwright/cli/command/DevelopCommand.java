@@ -51,6 +51,7 @@ public final class DevelopCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         FractionFormat fractions = new FractionFormat(fraction);
+        OutputFolder.check(out);
         Job job = jobFile.read();
         List<Development> developments = JobDevelopment.developAll(job, jobFile.label());
         try (OutputFolder folder = OutputFolder.stage(out)) {
@@ -80,7 +81,7 @@ public final class DevelopCommand implements Callable<Integer> {
         PrintWriter w = spec.commandLine().getOut();
         w.printf(Locale.ROOT, "%s: %d fittings, %s, %s dimensions, developed on the mean line (t = %s)%n",
                 job.name(), developments.size(), job.material().describe(), job.dimensions().word(),
-                text.length(job.thickness()));
+                text.thickness(job.thickness()));
         for (Development d : developments) {
             for (DevelopedPiece piece : d.pieces()) {
                 Pattern p = piece.pattern();

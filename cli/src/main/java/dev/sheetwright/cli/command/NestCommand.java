@@ -109,6 +109,7 @@ public final class NestCommand implements Callable<Integer> {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(),
                     "--reserve-minutes must be from 1 to 1440, got " + reserveMinutes);
         }
+        OutputFolder.check(out); // before the long nest, not after it
         Job job = jobFile.read();
         MinOffcut defaults = MinOffcut.defaults(job.unit());
         MinOffcut min = new MinOffcut(minOffcutWidth != null ? minOffcutWidth : defaults.width(),

@@ -51,6 +51,9 @@ public final class QuoteCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         double seconds = search.seconds(DEFAULT_SECONDS);
+        if (out != null) {
+            OutputFolder.check(out); // before the nest, not after it
+        }
         Job job = jobFile.read();
         ShopSettings settings = shop.settings();
         PrintWriter err = spec.commandLine().getErr();

@@ -18,12 +18,30 @@ final class Fields {
     private final String fitting;
     private final String prefix;
     private final Map<String, Object> map;
+    /** Largest magnitude a number may have here (a length bound), and how to say it. */
+    private final double largest;
+    private final String largestText;
 
     private Fields(String file, String fitting, String prefix, Map<String, Object> map) {
+        this(file, fitting, prefix, map, Double.POSITIVE_INFINITY, "");
+    }
+
+    private Fields(String file, String fitting, String prefix, Map<String, Object> map, double largest,
+            String largestText) {
         this.file = file;
         this.fitting = fitting;
         this.prefix = prefix;
         this.map = map;
+        this.largest = largest;
+        this.largestText = largestText;
+    }
+
+    /**
+     * The same fields where every number is a length (or an angle) no larger than {@code largest}; nested
+     * mappings keep the bound. {@code text} says the bound for messages, e.g. {@code 1000 in}.
+     */
+    Fields withLargest(double largest, String text) {
+        return new Fields(file, fitting, prefix, map, largest, text);
     }
 
     static Fields root(String file, Object document) {
@@ -55,7 +73,7 @@ final class Fields {
 
     /** The same fields, now known to belong to a fitting: messages name the fitting and the field within it. */
     Fields forFitting(String id) {
-        return new Fields(file, id, "", map);
+        return new Fields(file, id, "", map, largest, largestText);
     }
 
     String path(String key) {
@@ -88,7 +106,8 @@ final class Fields {
         if (!(o instanceof Map<?, ?>)) {
             throw error(key, "must be a mapping (indented key: value lines)");
         }
-        return new Fields(file, fitting, path(key) + ".", asStringMap(file, fitting, path(key), o));
+        return new Fields(file, fitting, path(key) + ".", asStringMap(file, fitting, path(key), o), largest,
+                largestText);
     }
 
     List<Fields> listOfMaps(String key) {
@@ -103,7 +122,7 @@ final class Fields {
             if (!(item instanceof Map<?, ?>)) {
                 throw new JobFileException(file, fitting, p, "must be a mapping (key: value lines)");
             }
-            out.add(new Fields(file, fitting, p + ".", asStringMap(file, fitting, p, item)));
+            out.add(new Fields(file, fitting, p + ".", asStringMap(file, fitting, p, item), largest, largestText));
         }
         return out;
     }
@@ -147,6 +166,9 @@ final class Fields {
         }
         if (!Double.isFinite(v)) {
             throw error(key, "must be a finite number, got " + o);
+        }
+        if (Math.abs(v) > largest) {
+            throw error(key, "must be at most " + largestText + ", got " + o);
         }
         return v;
     }

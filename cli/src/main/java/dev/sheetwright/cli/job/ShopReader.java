@@ -10,9 +10,6 @@ import dev.sheetwright.core.quote.ShopSettings;
 import dev.sheetwright.core.quote.Sourced;
 import dev.sheetwright.core.quote.WeightPrice;
 import dev.sheetwright.core.units.LengthUnit;
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -22,9 +19,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
-import org.snakeyaml.engine.v2.api.Load;
-import org.snakeyaml.engine.v2.api.LoadSettings;
-import org.snakeyaml.engine.v2.exceptions.YamlEngineException;
 
 /**
  * Reads a shop settings file ({@code --shop FILE}, YAML): the machine's own cut chart rows, rapid speeds, sheet
@@ -42,23 +36,14 @@ public final class ShopReader {
     }
 
     public static ShopSettings read(Path path) {
-        String text;
-        try {
-            text = Files.readString(path, StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new JobFileException(path.toString(), null, null, "cannot read the shop file: " + e.getMessage());
-        }
-        return parse(text, path.toString());
+        return fromDocument(YamlDocument.read(path, "shop file"), path.toString());
     }
 
     public static ShopSettings parse(String text, String file) {
-        Object doc;
-        try {
-            doc = new Load(LoadSettings.builder().setLabel(file).setAllowDuplicateKeys(false)
-                    .setMaxAliasesForCollections(10).build()).loadFromString(text);
-        } catch (YamlEngineException e) {
-            throw new JobFileException(file, null, null, "not valid YAML: " + e.getMessage().replace('\n', ' '));
-        }
+        return fromDocument(YamlDocument.load(text, file), file);
+    }
+
+    private static ShopSettings fromDocument(Object doc, String file) {
         Fields top = Fields.root(file, doc);
         top.allowOnly(TOP);
         LengthUnit unit;

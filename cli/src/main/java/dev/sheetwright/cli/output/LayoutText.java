@@ -13,7 +13,20 @@ public record LayoutText(LengthUnit unit, FractionFormat fractions) {
             case ANGLE -> String.format(Locale.ROOT, "%.4f deg", v.value());
             case NUMBER -> trimmed(v.value());
             case LENGTH -> length(v.value());
+            case AREA -> area(v.value());
         };
+    }
+
+    /** An area in square job units, decimals only. */
+    public String area(double value) {
+        return unit == LengthUnit.INCH ? String.format(Locale.ROOT, "%.2f in2", value)
+                : String.format(Locale.ROOT, "%.0f mm2", value);
+    }
+
+    /** Metal thickness: decimals only (a fraction to 1/16 would round sheet metal to 0). */
+    public String thickness(double value) {
+        return unit == LengthUnit.INCH ? String.format(Locale.ROOT, "%.4f in", value)
+                : String.format(Locale.ROOT, "%.3f mm", value);
     }
 
     public String length(double value) {

@@ -35,7 +35,11 @@ public final class ReportPdf {
     private static final float BODY = 9.5f;
     private static final float LEAD = 1.35f;
 
-    /** PDFBox reports building its font cache at INFO level; a report writer should not talk on the terminal. */
+    /**
+     * PDFBox talks through java.util.logging (font cache at INFO, "Using fallback font LiberationSans" for the
+     * standard Helvetica at WARNING: it draws with the Liberation Sans metrics it ships). Users see only our own
+     * messages; a PDFBox failure still reaches them as an exception.
+     */
     private static final java.util.logging.Logger PDFBOX_LOG = quiet();
 
     private final PDDocument doc;
@@ -46,7 +50,7 @@ public final class ReportPdf {
 
     private static java.util.logging.Logger quiet() {
         java.util.logging.Logger log = java.util.logging.Logger.getLogger("org.apache.pdfbox");
-        log.setLevel(java.util.logging.Level.WARNING);
+        log.setLevel(java.util.logging.Level.OFF);
         return log;
     }
 

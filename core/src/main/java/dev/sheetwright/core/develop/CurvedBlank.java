@@ -21,7 +21,10 @@ import java.util.List;
  * <p>End curves are cut as polylines within {@code tolerance.chord()}. End allowances are offset curves along the
  * curve normal, seam allowances parallel offsets of the straight seam edges. Without notching, each corner is
  * squared off where the seam offset line meets the tangent of the end offset curve; with notching the corner is
- * cut back to the net corner (trade-reference §7.5), the end strip ending on the curve normal there.
+ * cut back to the net corner (trade-reference §7.5). Either way an end strip (a lap, flange or connector) ends on
+ * the seam line, where the offset curve crosses the seam edge extended, not on the curve normal at the corner:
+ * where the end curve meets the seam at a slant (a gore seamed at the side, slope tan beta) the normal would put
+ * the strip's end w sin beta off the seam line, and the laps of two gores would not close over the seam.
  */
 final class CurvedBlank {
 
@@ -52,14 +55,16 @@ final class CurvedBlank {
         Point2 nr = new Point2(ur.y(), -ur.x());
         Point2 nl = ul.perpendicular();
         PlaneCurve topOut = top.offsetLeft(et);
-        List<Point2> topPts = CurveSampler.points(topOut, t0, t1, chord);
+        List<Point2> topPts = CurveSampler.points(topOut, onSeam(topOut, tp0, ul, t0, t1, tol),
+                onSeam(topOut, tp1, ur, t1, t0, tol), chord);
 
         ContourBuilder b;
         if (bottom == null) {
             b = ContourBuilder.startAt(Point2.ORIGIN, tol).lineTo(nr.times(wr));
         } else {
             PlaneCurve bottomOut = bottom.offsetLeft(-eb);
-            List<Point2> bottomPts = CurveSampler.points(bottomOut, t0, t1, chord);
+            List<Point2> bottomPts = CurveSampler.points(bottomOut, onSeam(bottomOut, b0, ul, t0, t1, tol),
+                    onSeam(bottomOut, b1, ur, t1, t0, tol), chord);
             if (notch) {
                 b = ContourBuilder.startAt(b0, tol);
                 bottomPts.forEach(b::lineTo);
@@ -104,6 +109,33 @@ final class CurvedBlank {
         marks.add(new Mark(MarkKind.CENTRE, new Line(bm, tm2)));
         Point2 label = bm.plus(tm2).times(0.5);
         return new Pattern(fitting, piece, count, b.close(), List.of(), marks, label);
+    }
+
+    /**
+     * The parameter where the offset end curve crosses the seam line through the net corner {@code corner} along
+     * {@code seam}, searched from the corner's parameter {@code t} (Newton steps on the signed distance from the
+     * line; the curve's tangent gives the slope). {@code t} itself when the curve already starts on the line, when
+     * the end has no width, or when the search would leave a quarter of the range {@code t..other}.
+     */
+    private static double onSeam(PlaneCurve curve, Point2 corner, Point2 seam, double t, double other,
+            Tolerance tol) {
+        double span = Math.abs(other - t);
+        double u = t;
+        for (int i = 0; i < 30; i++) {
+            double f = curve.at(u).minus(corner).cross(seam);
+            if (Math.abs(f) <= tol.linear() * 1e-3) {
+                return u;
+            }
+            double df = curve.tangent(u).cross(seam);
+            if (df == 0 || !Double.isFinite(df)) {
+                return t;
+            }
+            u -= f / df;
+            if (!Double.isFinite(u) || Math.abs(u - t) > span / 4) {
+                return t;
+            }
+        }
+        return t;
     }
 
     /** Where the line through {@code p} along {@code d} meets the line through {@code q} along {@code e}. */

@@ -106,13 +106,18 @@ public final class EccentricReducerDeveloper {
         List<DevelopedPiece> pieces = new ArrayList<>();
         for (int i = 0; i < patterns.size(); i++) {
             pieces.add(new DevelopedPiece(patterns.get(i), layout(cone, d1, d2, Math.hypot(ex, ey),
-                    pieceAngles.get(i))));
+                    pieceAngles.get(i), Math.hypot(ex, ey) <= ctx.tolerance().linear())));
         }
         return new Development(spec, pieces, warnings);
     }
 
-    private static Layout layout(ObliqueCone cone, double d1, double d2, double offset, double pieceAngle) {
-        List<LayoutValue> v = List.of(
+    /**
+     * The hand-layout values. A right cone ({@code right}: no plan offset) is laid out by radial lines from one
+     * slant radius, so the triangulated angle of an oblique layout is left out: it would mean nothing there.
+     */
+    private static Layout layout(ObliqueCone cone, double d1, double d2, double offset, double pieceAngle,
+            boolean right) {
+        List<LayoutValue> v = new ArrayList<>(List.of(
                 LayoutValue.length("largeMeanDiameter", "large end mean diameter", d1),
                 LayoutValue.length("smallMeanDiameter", "small end mean diameter (0: cone to its apex)", d2),
                 LayoutValue.length("offset", "plan offset of the small-end centre", offset),
@@ -129,11 +134,13 @@ public final class EccentricReducerDeveloper {
                 LayoutValue.angle("patternAngle", "pattern angle (whole fitting, exact)",
                         Math.toDegrees(cone.totalAngle())),
                 LayoutValue.angle("pieceAngle", "pattern angle of this piece", Math.toDegrees(pieceAngle)),
-                LayoutValue.angle("handTriangulatedAngle", "pattern angle by " + HAND_CHORDS
-                        + " chords (hand triangulation)", Math.toDegrees(cone.triangulatedAngle(HAND_CHORDS))),
                 LayoutValue.length("largeStretchOut", "large end stretch-out", Math.PI * d1),
                 LayoutValue.length("smallStretchOut", "small end stretch-out", Math.PI * d2),
-                LayoutValue.angle("slope", "steepest side from the axis", cone.steepestSlopeDeg()));
+                LayoutValue.angle("slope", "steepest side from the axis", cone.steepestSlopeDeg())));
+        if (!right) {
+            v.add(11, LayoutValue.angle("handTriangulatedAngle", "pattern angle by " + HAND_CHORDS
+                    + " chords (hand triangulation)", Math.toDegrees(cone.triangulatedAngle(HAND_CHORDS))));
+        }
         List<List<Double>> rows = new ArrayList<>();
         for (int i = 0; i <= TABLE_DIVISIONS; i++) {
             double a = 2 * Math.PI * i / TABLE_DIVISIONS;

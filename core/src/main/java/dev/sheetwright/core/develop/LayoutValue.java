@@ -5,12 +5,12 @@ package dev.sheetwright.core.develop;
  *
  * @param key machine-readable name used in patterns.json
  * @param label words for people
- * @param value the number, in the job's length unit, or degrees for angles
+ * @param value the number, in the job's length unit, square units for areas, or degrees for angles
  */
 public record LayoutValue(String key, String label, double value, Kind kind) {
 
     /** How the value is shown. */
-    public enum Kind { LENGTH, ANGLE, NUMBER }
+    public enum Kind { LENGTH, AREA, ANGLE, NUMBER }
 
     public LayoutValue {
         if (!Double.isFinite(value)) {
@@ -20,6 +20,11 @@ public record LayoutValue(String key, String label, double value, Kind kind) {
 
     public static LayoutValue length(String key, String label, double value) {
         return new LayoutValue(key, label, value, Kind.LENGTH);
+    }
+
+    /** An area in square job units (in2 or mm2). */
+    public static LayoutValue area(String key, String label, double value) {
+        return new LayoutValue(key, label, value, Kind.AREA);
     }
 
     public static LayoutValue angle(String key, String label, double degrees) {

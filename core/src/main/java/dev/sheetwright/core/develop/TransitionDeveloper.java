@@ -263,7 +263,7 @@ public final class TransitionDeveloper {
                             chainLength(st, st.base())),
                     LayoutValue.length("roundLength", "round-end edge length of this piece (net, chords)",
                             chainLength(st, st.top())),
-                    LayoutValue.length("netArea", "net area of this piece", netArea(st)),
+                    LayoutValue.area("netArea", "net area of this piece", netArea(st)),
                     LayoutValue.angle("maxSideSlope", "steepest side slope from the vertical",
                             max(solid.sideSlopes())),
                     LayoutValue.length("blankWidth", "blank width with allowances", p.bounds().width()),

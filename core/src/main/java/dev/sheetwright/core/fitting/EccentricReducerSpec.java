@@ -44,8 +44,9 @@ public record EccentricReducerSpec(String id, int qty, double large, double smal
         return new EccentricReducerSpec(id, qty, large, small, height, 0, 0, true, pieces, allowances);
     }
 
+    /** {@code cone} for a whole cone (small end 0, right or oblique), else {@code eccentric-reducer}. */
     @Override
     public String type() {
-        return "eccentric-reducer";
+        return small == 0 ? "cone" : "eccentric-reducer";
     }
 }

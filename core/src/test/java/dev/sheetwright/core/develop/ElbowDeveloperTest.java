@@ -196,4 +196,33 @@ class ElbowDeveloperTest {
         assertEquals("gores", assertThrows(FittingException.class,
                 () -> net(10, 90, 1, 15, SeamPosition.SIDE)).field());
     }
+
+    @Test
+    void miterLaps_endOnTheSeamLine_notSquareToTheMiterCurve() {
+        // 6 in, 4-piece 90 deg, seam at the side: there the miter curve meets the seam at slope tan beta (15 deg),
+        // so a lap ended on the curve normal would stick out lap x sin(beta) = 0.0647 in past the seam line
+        double lap = 0.25;
+        Allowances notched = new Allowances(SeamAllowance.NONE, dev.sheetwright.core.fitting.EndAllowance.NONE,
+                dev.sheetwright.core.fitting.EndAllowance.NONE, true);
+        ElbowSpec spec = new ElbowSpec("EL", 1, 6, 90, 4, 9, SeamPosition.SIDE, notched,
+                new SeamAllowance(SeamKind.LAP, lap, lap));
+        double stretchOut = Math.PI * 6;
+        double tanBeta = Math.tan(Math.toRadians(15));
+        for (DevelopedPiece piece : ElbowDeveloper.develop(spec, MEAN).pieces()) {
+            List<Point2> pts = piece.pattern().outer().flatten(Tolerance.INCH.chord());
+            double minX = pts.stream().mapToDouble(Point2::x).min().orElseThrow();
+            double maxX = pts.stream().mapToDouble(Point2::x).max().orElseThrow();
+            assertEquals(0, minX, EPS4, piece.pattern().piece() + ": nothing left of the seam line x = 0");
+            assertEquals(stretchOut, maxX, EPS4, piece.pattern().piece() + ": nothing right of x = stretch-out");
+            // the lap reaches the seam line: at x = 0 the outline rises to the offset curve's crossing, about
+            // lap / cos(beta) above the net corner (the curve's slope at the side is tan beta)
+            double netTop = 9 * tanBeta; // ordinate at the side seam: R tan beta (trade-reference §3.2)
+            double topAtSeam = pts.stream().filter(p -> Math.abs(p.x()) < EPS4).mapToDouble(Point2::y).max()
+                    .orElseThrow();
+            if (!piece.pattern().piece().startsWith("end") || topAtSeam > netTop + EPS4) {
+                assertEquals(netTop + lap / Math.cos(Math.toRadians(15)), topAtSeam, 2e-3,
+                        piece.pattern().piece());
+            }
+        }
+    }
 }
