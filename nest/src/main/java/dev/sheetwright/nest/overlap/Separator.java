@@ -13,8 +13,8 @@ import java.util.SplittableRandom;
  * move budget; {@link #moves()} counts the piece moves made.
  */
 final class Separator {
-    static final int STRIKES = 2;
-    static final int SWEEPS_WITHOUT_PROGRESS = 15;
+    static final int STRIKES = 3;
+    static final int SWEEPS_WITHOUT_PROGRESS = 60;
     static final int BIN_SAMPLES = 24;
     static final int LOCAL_SAMPLES = 24;
     static final int REFINED = 2;
@@ -103,6 +103,10 @@ final class Separator {
         return OverlapMeasure.outside(s, bx[0], bx[1], bx[2], bx[3]);
     }
 
+    double outOf(int i) {
+        return out[i];
+    }
+
     /** Overlap of piece i with everything (unweighted). */
     double overlapOf(int i) {
         double s = out[i];
@@ -146,15 +150,26 @@ final class Separator {
 
     /** Moves piece i to the best place found for it; returns whether it moved. */
     boolean move(int i) {
+        return move(i, false);
+    }
+
+    /** Moves piece i to the best place found for it, away from where it is even if that is better. */
+    void reinsert(int i) {
+        move(i, true);
+    }
+
+    private boolean move(int i, boolean away) {
         moves++;
-        double bestCost = cost(i, at[i], bin[i], Double.POSITIVE_INFINITY);
+        double bestCost = away ? Double.POSITIVE_INFINITY : cost(i, at[i], bin[i], Double.POSITIVE_INFINITY);
         if (bestCost == 0) {
             return false;
         }
         double[][] top = new double[REFINED][];
         double[] topCost = new double[REFINED];
         java.util.Arrays.fill(topCost, Double.POSITIVE_INFINITY);
-        offer(top, topCost, bestCost, bin[i], at[i].x, at[i].y, at[i].angle);
+        if (!away) {
+            offer(top, topCost, bestCost, bin[i], at[i].x, at[i].y, at[i].angle);
+        }
         SearchShape sh = shapes[i];
         for (int k = 0; k < BIN_SAMPLES; k++) {
             int b = randomOpenBin();
@@ -168,7 +183,7 @@ final class Separator {
             offer(top, topCost, c, b, x, y, a);
         }
         double spread = Math.max(sh.reach, precision);
-        for (int k = 0; k < LOCAL_SAMPLES; k++) {
+        for (int k = 0; k < (away ? 0 : LOCAL_SAMPLES); k++) {
             double r = spread * (k < LOCAL_SAMPLES / 2 ? 0.1 : 1.0);
             double x = at[i].x + (rnd.nextDouble() * 2 - 1) * r;
             double y = at[i].y + (rnd.nextDouble() * 2 - 1) * r;
@@ -356,7 +371,6 @@ final class Separator {
         int[] order = new int[n];
         for (int strike = 0; strike < STRIKES; strike++) {
             int still = 0;
-            boolean progress = false;
             while (still < SWEEPS_WITHOUT_PROGRESS) {
                 if (budget.spent(moves)) {
                     restore(best);
@@ -387,17 +401,12 @@ final class Separator {
                     bestTotal = total;
                     best = snapshot();
                     still = 0;
-                    progress = true;
                 } else {
                     still++;
                 }
                 growWeights();
             }
             restore(best);
-            if (!progress) {
-                // weights that did not help are dropped before the next strike
-                resetWeights();
-            }
         }
         return false;
     }

@@ -254,7 +254,7 @@ public final class StripSearch {
                 sep.refresh();
                 for (int i = 0; i < sep.n; i++) {
                     if (sep.at[i].maxX > target) {
-                        sep.move(i);
+                        sep.reinsert(i);
                     }
                 }
                 sep.resetWeights();

@@ -1,0 +1,62 @@
+package dev.sheetwright.nest.overlap;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+
+import dev.sheetwright.nest.bench.StripInstance;
+import dev.sheetwright.nest.bench.StripPacker;
+import dev.sheetwright.nest.check.NestChecker;
+import dev.sheetwright.nest.model.NestOptions;
+import dev.sheetwright.nest.model.Placement;
+import dev.sheetwright.nest.model.RotationRule;
+import dev.sheetwright.nest.testing.Shapes;
+
+class StripSearchTest {
+    /** An invented strip: L-shapes, triangles and bars, any angle allowed. */
+    private static StripInstance mixed(List<Double> rotations) {
+        List<StripInstance.Item> items = new ArrayList<>();
+        items.add(new StripInstance.Item(1, 4, Shapes.wkt("POLYGON ((0 0, 6 0, 6 2, 2 2, 2 5, 0 5, 0 0))")));
+        items.add(new StripInstance.Item(2, 5, Shapes.wkt("POLYGON ((0 0, 5 0, 1 4, 0 0))")));
+        items.add(new StripInstance.Item(3, 3, Shapes.rect(0, 0, 7, 1.5)));
+        return new StripInstance("mixed", 10, rotations, items);
+    }
+
+    @Test
+    void aCountedRunGivesTheSameLayoutOnOneAndOnTwoThreads() {
+        StripInstance inst = mixed(List.of(0.0, 90.0, 180.0, 270.0));
+        StripPacker.StripResult one = StripPacker.packWithOverlapSearch(inst, NestOptions.steps(600, 11, 1));
+        StripPacker.StripResult two = StripPacker.packWithOverlapSearch(inst, NestOptions.steps(600, 11, 2));
+        assertEquals(one.placements(), two.placements());
+        assertEquals(one.length(), two.length());
+        assertTrue(NestChecker.check(inst.toRequest(), one.nest()).isEmpty());
+    }
+
+    @Test
+    void anyAngleLayoutsPassTheChecker() {
+        StripInstance inst = mixed(null);
+        assertTrue(inst.rotationRule() instanceof RotationRule.Free);
+        StripPacker.StripResult r = StripPacker.packWithOverlapSearch(inst, NestOptions.steps(800, 5, 2));
+        assertEquals(inst.pieceCount(), r.placements().size());
+        assertTrue(NestChecker.check(inst.toRequest(), r.nest()).isEmpty(), "checker: " + NestChecker.check(inst.toRequest(), r.nest()));
+        StripPacker.StripResult first = StripPacker.pack(inst, NestOptions.constructiveOnly());
+        assertTrue(r.length() <= first.length() + 1e-9, "never longer than the first layout");
+    }
+
+    @Test
+    void resultsPlaceEveryCopyOnce() {
+        StripInstance inst = mixed(List.of(0.0, 180.0));
+        StripPacker.StripResult r = StripPacker.packWithOverlapSearch(inst, NestOptions.steps(400, 3, 2));
+        List<String> seen = new ArrayList<>();
+        for (Placement p : r.placements()) {
+            String key = p.label() + "#" + p.copy();
+            assertTrue(!seen.contains(key), key + " twice");
+            seen.add(key);
+        }
+        assertEquals(inst.pieceCount(), seen.size());
+    }
+}
