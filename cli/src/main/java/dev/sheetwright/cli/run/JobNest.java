@@ -54,7 +54,7 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
             }
         }
         JobNestRequest plan = JobNestRequest.of(pieces, job.cutting(), withRack(job, file, rackRemnants),
-                job.tolerance().chord());
+                job.tolerance());
         NestResult result = dev.sheetwright.nest.place.Nester.nest(plan.request(), options);
         List<Violation> violations = NestChecker.check(plan.request(), result);
         if (!violations.isEmpty()) {

@@ -24,7 +24,7 @@ public final class Progress implements ProgressListener {
     }
 
     @Override
-    public synchronized void improved(long iteration, int sheets, double cost, double lastLength) {
+    public synchronized void improved(long iteration, int sheets, double cost, double lastLength, double utilization) {
         if (!show) {
             return;
         }

@@ -204,14 +204,7 @@ public final class CleanOffcut {
 
     /** The stock as laid out, or null for a coil. */
     private static Polygon stockPolygon(SheetLayout layout) {
-        if (layout.stock() instanceof Sheet s) {
-            return rectangle(0, 0, s.width(), s.height());
-        } else if (layout.stock() instanceof Remnant r) {
-            return r.outline();
-        } else if (layout.stock() instanceof Coil) {
-            return null;
-        }
-        throw new IllegalArgumentException("unknown stock " + layout.stock());
+        return layout.stock().match(s -> rectangle(0, 0, s.width(), s.height()), Remnant::outline, c -> null);
     }
 
     private static Polygon rectangle(double x0, double y0, double x1, double y1) {

@@ -4,9 +4,10 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
-import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.NestPrecision;
 import dev.sheetwright.nest.model.Remnant;
 import dev.sheetwright.nest.model.Sheet;
+import dev.sheetwright.nest.model.SheetLayout;
 
 /**
  * Places copies one after another in a given order (first fit over the opened stock, bottom-left on each, every
@@ -159,10 +160,10 @@ final class Layouter {
     private boolean tryBin(Bin bin, int t) {
         boolean found = false;
         for (Orientation o : tryList) {
-            if (!bin.slot.boxFits(o, pb.eps)) {
+            if (!bin.slot.boxFits(o, pb.precision.eps())) {
                 continue;
             }
-            if (bin.bottomLeft(o, pb.cache, pb.eps, scratch, pos, cheap)) {
+            if (bin.bottomLeft(o, pb.cache, pb.precision.eps(), scratch, pos, cheap)) {
                 if (!found || pos.key1 < best.key1 || (pos.key1 == best.key1 && pos.key2 < best.key2)) {
                     best.x = pos.x;
                     best.y = pos.y;
@@ -201,23 +202,18 @@ final class Layouter {
         for (int b = 0; b < bins.size(); b++) {
             Bin bin = bins.get(b);
             double used = usedExtent(bin);
-            if (bin.slot.stock instanceof Sheet s) {
-                cost += s.cost();
-                area += s.width() * s.height();
-            } else if (bin.slot.stock instanceof Coil c) {
-                double len = Math.max(0, used + margin);
-                cost += c.costPerLength() * len;
-                area += c.width() * len;
-            } else {
-                Remnant r = (Remnant) bin.slot.stock;
-                cost += r.cost();
-                area += r.outline().getArea();
-            }
+            double len = Math.max(0, used + margin);
+            cost += bin.slot.stock.match(Sheet::cost, Remnant::cost, c -> c.costPerLength() * len);
+            area += SheetLayout.stockArea(bin.slot.stock, len);
             if (b == bins.size() - 1) {
                 last = used;
             }
         }
-        return new Score(unplaced, bins.size(), cost, area, last);
+        double parts = 0;
+        for (Bin bin : bins) {
+            parts += bin.partArea();
+        }
+        return new Score(unplaced, bins.size(), cost, area, last, parts);
     }
 
     /** Copy of the current layout. */
@@ -237,7 +233,12 @@ final class Layouter {
     }
 
     /** Lexicographic objective: unplaced copies, stock cost, stock area, then length used on the last stock. */
-    record Score(int unplaced, int bins, double cost, double area, double lastLength) {
+    record Score(int unplaced, int bins, double cost, double area, double lastLength, double partArea) {
+        /** Part area over stock area, 0..1. */
+        double utilization() {
+            return area > 0 ? Math.min(1, partArea / area) : 0;
+        }
+
         boolean betterThan(Score o) {
             return compare(o) < 0;
         }
@@ -262,8 +263,7 @@ final class Layouter {
         }
 
         private static int cmp(double a, double b) {
-            double tol = 1e-12 * Math.max(Math.abs(a), Math.abs(b));
-            return a < b - tol ? -1 : a > b + tol ? 1 : 0;
+            return NestPrecision.compareTotals(a, b);
         }
 
         /** Threshold acceptance: not worse in count terms, and cost and last length within a factor 1 + t. */
@@ -272,9 +272,9 @@ final class Layouter {
                 return unplaced < cur.unplaced;
             }
             if (bins != cur.bins) {
-                return bins < cur.bins && cost <= cur.cost * (1 + t) + 1e-12;
+                return bins < cur.bins && cost <= cur.cost * (1 + t + NestPrecision.RELATIVE_TIE);
             }
-            if (cost > cur.cost * (1 + t) + 1e-12) {
+            if (cost > cur.cost * (1 + t + NestPrecision.RELATIVE_TIE)) {
                 return false;
             }
             return cost < cur.cost || lastLength <= cur.lastLength + t * Math.abs(cur.lastLength);

@@ -169,7 +169,7 @@ public final class Nester {
                     cur = s;
                     if (s.betterThan(best.score())) {
                         best = lay.snapshot(s);
-                        options.listener().improved(it + 1, s.bins(), s.cost(), s.lastLength());
+                        options.listener().improved(it + 1, s.bins(), s.cost(), s.lastLength(), s.utilization());
                     }
                 } else {
                     valid = from;
@@ -279,16 +279,16 @@ public final class Nester {
                 maxY = Math.max(maxY, plan.y()[k] + o.bMaxY);
             }
             double used = Math.max(0, plan.usedExtent() + margin);
-            Offcut offcut = null;
-            if (plan.slot().stock instanceof Sheet sh) {
-                offcut = bestOffcut(0, 0, sh.width(), sh.height(), maxX + gap, maxY + gap);
-            } else if (plan.slot().stock instanceof Remnant r) {
-                Envelope e = r.outline().getEnvelopeInternal();
-                Offcut o = bestOffcut(e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY(), maxX + gap, maxY + gap);
-                if (o != null && r.outline().covers(rectangle(o))) {
-                    offcut = o;
-                }
-            }
+            double usedX = maxX + gap;
+            double usedY = maxY + gap;
+            Offcut offcut = plan.slot().stock.match(
+                    sh -> bestOffcut(0, 0, sh.width(), sh.height(), usedX, usedY),
+                    r -> {
+                        Envelope e = r.outline().getEnvelopeInternal();
+                        Offcut o = bestOffcut(e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY(), usedX, usedY);
+                        return o != null && r.outline().covers(rectangle(o)) ? o : null;
+                    },
+                    c -> null);
             double stockArea = SheetLayout.stockArea(plan.slot().stock, used);
             double util = stockArea > 0 ? Math.min(1, partArea / stockArea) : 0;
             sheets.add(new SheetLayout(plan.slot().stock, sheets.size(), used, parts, offcut, util));
