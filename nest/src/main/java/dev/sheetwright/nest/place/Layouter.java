@@ -92,6 +92,86 @@ final class Layouter {
         return true;
     }
 
+    /**
+     * Places from {@code from} on in order until {@code deadline} (System.nanoTime) passes; returns how many copies
+     * of the order are then placed or given up (the order's length when it finished).
+     */
+    int runUntil(int[] order, int from, long deadline) {
+        rollback(from);
+        for (int i = from; i < order.length; i++) {
+            if (System.nanoTime() >= deadline) {
+                return i;
+            }
+            placeOne(order[i]);
+        }
+        return order.length;
+    }
+
+    /**
+     * Places {@code order[from..]} fast, with no no-fit polygon: in columns along the compacting axis by the boxes
+     * of their spacing shapes (boxes that do not overlap keep the gap), beyond everything on the last opened stock,
+     * then on new stock without obstacles. For a run whose time is nearly spent; a copy is given up only when no
+     * stock is left.
+     */
+    void placeOnShelves(int[] order, int from) {
+        rollback(from);
+        Shelves shelves = new Shelves(pb, bins.isEmpty() ? null : bins.get(bins.size() - 1));
+        for (int i = from; i < order.length; i++) {
+            int inst = order[i];
+            evInst[steps] = inst;
+            evNew[steps] = false;
+            evBin[steps] = -1;
+            int t = pb.instType[inst];
+            if (pb.tooLarge[t] == null) {
+                Shelves.Spot spot = shelves.place(t);
+                while (spot == null) {
+                    Slot next = nextPlainSlot(t);
+                    if (next == null) {
+                        break;
+                    }
+                    Bin bin = new Bin(next, pb.types.size());
+                    bins.add(bin);
+                    slotUsed[next.index]++;
+                    evNew[steps] = true;
+                    shelves = new Shelves(pb, bin);
+                    spot = shelves.place(t);
+                    if (spot == null) {
+                        // the new stock takes no copy of this type: close it again
+                        bins.remove(bins.size() - 1);
+                        slotUsed[next.index]--;
+                        evNew[steps] = false;
+                        shelves = new Shelves(pb, null);
+                        skipped.add(next.index);
+                    }
+                }
+                if (spot != null) {
+                    Bin bin = shelves.bin();
+                    bin.add(spot.orientation(), inst, spot.x(), spot.y(), pb.typeArea[t]);
+                    evBin[steps] = bins.indexOf(bin);
+                }
+            }
+            skipped.clear();
+            steps++;
+        }
+    }
+
+    private final java.util.Set<Integer> skipped = new java.util.HashSet<>();
+
+    /** Stock with none left of it used, no obstacles, taking a box of type t; cheapest first; else null. */
+    private Slot nextPlainSlot(int t) {
+        for (Slot slot : pb.slots) {
+            if (slotUsed[slot.index] >= slot.limit || slot.obstacles.length > 0 || skipped.contains(slot.index)) {
+                continue;
+            }
+            for (Orientation o : pb.quickOrientations.get(t)) {
+                if (slot.boxFits(o, pb.precision.eps())) {
+                    return slot;
+                }
+            }
+        }
+        return null;
+    }
+
     private List<Orientation> tryList;
     private boolean cheap;
     private boolean degraded;
