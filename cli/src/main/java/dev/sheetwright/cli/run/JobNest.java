@@ -14,6 +14,7 @@ import dev.sheetwright.nest.model.NestOptions;
 import dev.sheetwright.nest.model.NestResult;
 import dev.sheetwright.nest.model.Offcut;
 import dev.sheetwright.nest.model.SheetLayout;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -33,6 +34,13 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
     public JobNest {
         offcuts = Map.copyOf(offcuts);
     }
+
+    /**
+     * Time kept back from a timed search per piece, for checking the nest and writing its files, so that the whole
+     * command ends within its --time plus a few seconds: measured on the 2-core development machine, checking and
+     * writing a 10,000-piece nest took about 5 s of processor time (bench/run-scale-benchmark.sh).
+     */
+    static final Duration HANDOVER_PER_PIECE = Duration.ofNanos(500_000);
 
     public static JobNest run(Job job, String file, NestOptions options) {
         return run(job, file, options, List.of());
@@ -55,7 +63,8 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
         }
         JobNestRequest plan = JobNestRequest.of(pieces, job.cutting(), withRack(job, file, rackRemnants),
                 job.tolerance());
-        NestResult result = dev.sheetwright.nest.place.Nester.nest(plan.request(), options);
+        NestOptions timed = options.reserving(HANDOVER_PER_PIECE.multipliedBy(plan.request().totalCopies()));
+        NestResult result = dev.sheetwright.nest.place.Nester.nest(plan.request(), timed);
         List<Violation> violations = NestChecker.check(plan.request(), result);
         if (!violations.isEmpty()) {
             throw new IllegalStateException("the nest failed its independent check (a bug; nothing was written): "

@@ -2,7 +2,12 @@ package dev.sheetwright.nest.model;
 
 import java.util.List;
 
+import java.util.ArrayList;
+
+import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.LinearRing;
+import org.locationtech.jts.geom.Polygon;
 
 /**
  * The one precision of a nest, built once per request: {@code scale} is the largest coordinate of the stock and the
@@ -90,5 +95,41 @@ public record NestPrecision(double scale, double linear) {
     public static boolean multipleOf(double angleDeg, double stepDeg) {
         double q = angleDeg / stepDeg;
         return Math.abs(q - Math.rint(q)) * stepDeg <= ANGLE_DEG;
+    }
+
+    /**
+     * The outline without vertices closer than {@link #linear()} to the vertex kept before them (each ring), so that
+     * every edge is longer than the precision: a placed copy (rotated by any angle, moved anywhere) then has no
+     * zero-length edge after rounding, and drawing writers accept it. The same polygon when nothing is dropped, or
+     * when dropping would leave a ring of fewer than three vertices.
+     */
+    public Polygon clean(Polygon shape) {
+        LinearRing shell = clean(shape.getExteriorRing());
+        boolean changed = shell != shape.getExteriorRing();
+        LinearRing[] holes = new LinearRing[shape.getNumInteriorRing()];
+        for (int i = 0; i < holes.length; i++) {
+            holes[i] = clean(shape.getInteriorRingN(i));
+            changed |= holes[i] != shape.getInteriorRingN(i);
+        }
+        return changed ? shape.getFactory().createPolygon(shell, holes) : shape;
+    }
+
+    private LinearRing clean(LinearRing ring) {
+        Coordinate[] cs = ring.getCoordinates();
+        int n = cs.length - 1; // the last repeats the first
+        ArrayList<Coordinate> kept = new ArrayList<>(n + 1);
+        for (int i = 0; i < n; i++) {
+            if (kept.isEmpty() || cs[i].distance(kept.get(kept.size() - 1)) > linear) {
+                kept.add(cs[i]);
+            }
+        }
+        while (kept.size() > 1 && kept.get(kept.size() - 1).distance(kept.get(0)) <= linear) {
+            kept.remove(kept.size() - 1);
+        }
+        if (kept.size() == n || kept.size() < 3) {
+            return ring;
+        }
+        kept.add(kept.get(0).copy());
+        return ring.getFactory().createLinearRing(kept.toArray(new Coordinate[0]));
     }
 }

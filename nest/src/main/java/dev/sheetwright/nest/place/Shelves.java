@@ -41,7 +41,14 @@ final class Shelves {
         }
         List<Orientation> os = new ArrayList<>(pb.quickOrientations.get(t));
         boolean alongX = bin.slot.alongX;
-        os.sort(Comparator.comparingDouble(o -> alongX ? o.sMaxX - o.sMinX : o.sMaxY - o.sMinY));
+        Slot slot = bin.slot;
+        double room = alongX ? slot.cy1 - slot.cy0 : slot.cx1 - slot.cx0;
+        // copies a full column holds per unit of length along the compacting axis, most first
+        os.sort(Comparator.comparingDouble(o -> {
+            double along = alongX ? o.sMaxX - o.sMinX : o.sMaxY - o.sMinY;
+            double across = alongX ? o.sMaxY - o.sMinY : o.sMaxX - o.sMinX;
+            return -Math.max(1, Math.floor(room / across)) / along;
+        }));
         Spot s = inColumn(os);
         if (s == null && colEnd > Double.NEGATIVE_INFINITY) {
             colStart = Math.max(colStart, colEnd);
