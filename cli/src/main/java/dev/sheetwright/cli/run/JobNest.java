@@ -37,10 +37,11 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
 
     /**
      * Time kept back from a timed search per piece, for checking the nest and writing its files, so that the whole
-     * command ends within its --time plus a few seconds: measured on the 2-core development machine, checking and
-     * writing a 10,000-piece nest took about 5 s of processor time (bench/run-scale-benchmark.sh).
+     * command ends within its --time plus a few seconds (at most half the time is kept back): measured on the
+     * 2-core development machine, checking and writing a 10,000-piece nest took about 10 s when the machine was
+     * not busy (bench/run-scale-benchmark.sh).
      */
-    static final Duration HANDOVER_PER_PIECE = Duration.ofNanos(500_000);
+    static final Duration HANDOVER_PER_PIECE = Duration.ofNanos(1_000_000);
 
     public static JobNest run(Job job, String file, NestOptions options) {
         return run(job, file, options, List.of());
