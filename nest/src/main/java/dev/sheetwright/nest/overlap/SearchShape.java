@@ -32,6 +32,8 @@ public final class SearchShape {
     static final double POLE_COVER = 0.92;
     /** Inscribed circles are found to this share of the shape's size (they only measure overlap depth). */
     static final double CIRCLE_TOLERANCE = 1e-3;
+    /** First simplification distance, as a share of the shape's size (it grows by half until few vertices remain). */
+    static final double FIRST_SIMPLIFY_SHARE = 1e-3;
 
     private static final GeometryFactory GF = new GeometryFactory();
 
@@ -139,7 +141,7 @@ public final class SearchShape {
             return p;
         }
         double size = Math.max(p.getEnvelopeInternal().getWidth(), p.getEnvelopeInternal().getHeight());
-        double d = Math.max(precision, size * 1e-3);
+        double d = Math.max(precision, size * FIRST_SIMPLIFY_SHARE);
         for (int round = 0; round < 40; round++) {
             Polygon s = largest(DouglasPeuckerSimplifier.simplify(p, d));
             if (s != null && s.getExteriorRing().getNumPoints() - 1 <= MAX_VERTICES) {
@@ -161,7 +163,7 @@ public final class SearchShape {
         }
         BufferParameters bp = new BufferParameters(2, BufferParameters.CAP_FLAT, BufferParameters.JOIN_MITRE, 3);
         double size = Math.max(p.getEnvelopeInternal().getWidth(), p.getEnvelopeInternal().getHeight());
-        double d = size * 2e-3;
+        double d = size * FIRST_SIMPLIFY_SHARE;
         for (int round = 0; round < 40; round++) {
             Polygon s = largest(DouglasPeuckerSimplifier.simplify(p, d));
             if (s != null) {

@@ -19,8 +19,10 @@ final class Separator {
     static final int LOCAL_SAMPLES = 24;
     static final int REFINED = 2;
     static final double WEIGHT_DECAY = 0.95;
+    /** Refinement stops below this step, as a share of the piece's size. */
+    static final double SMALLEST_STEP_SHARE = 1e-4;
     /** Most a pair's weight grows in one sweep (the deepest overlap), as a share of the weight. */
-    static final double WEIGHT_GROWTH = 0.3;
+    static final double WEIGHT_GROWTH = 0.8;
 
     final int n;
     final SearchShape[] shapes;
@@ -262,7 +264,7 @@ final class Separator {
         SearchShape sh = shapes[i];
         double step = Math.max(sh.reach * 0.1, precision);
         double astep = angles.free() ? AngleSet.FREE_REFINE_STEP_DEG / 2 : 0;
-        double minStep = Math.max(precision, sh.reach * 1e-4);
+        double minStep = Math.max(precision, sh.reach * SMALLEST_STEP_SHARE);
         int evals = 0;
         while (step >= minStep && c > 0 && evals < 60) {
             boolean better = false;
@@ -325,9 +327,9 @@ final class Separator {
             return;
         }
         for (int i = 0; i < n; i++) {
-            outWeight[i] = out[i] > 0 ? outWeight[i] * (1 + WEIGHT_GROWTH * out[i] / max) : Math.max(1, outWeight[i] * WEIGHT_DECAY);
+            outWeight[i] = out[i] > 0 ? outWeight[i] * (1.2 + WEIGHT_GROWTH * out[i] / max) : Math.max(1, outWeight[i] * WEIGHT_DECAY);
             for (int j = i + 1; j < n; j++) {
-                double w = pair[i][j] > 0 ? weight[i][j] * (1 + WEIGHT_GROWTH * pair[i][j] / max) : Math.max(1, weight[i][j] * WEIGHT_DECAY);
+                double w = pair[i][j] > 0 ? weight[i][j] * (1.2 + WEIGHT_GROWTH * pair[i][j] / max) : Math.max(1, weight[i][j] * WEIGHT_DECAY);
                 weight[i][j] = w;
                 weight[j][i] = w;
             }

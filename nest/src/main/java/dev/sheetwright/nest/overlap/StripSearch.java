@@ -18,6 +18,7 @@ import dev.sheetwright.nest.check.NestChecker;
 import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.NestOptions;
 import dev.sheetwright.nest.model.NestPiece;
+import dev.sheetwright.nest.model.NestPrecision;
 import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestResult;
 import dev.sheetwright.nest.model.Placement;
@@ -39,11 +40,11 @@ public final class StripSearch {
     /** First cut of the strip, as a share of its length. */
     static final double FIRST_CUT = 0.02;
     static final double SMALLEST_CUT = 0.002;
+    /** The least overlap a collision counts as, as a share of the mean piece size. */
+    static final double FLOOR_SHARE = 1e-3;
     /** Share of the run after which the strip is cut in small steps only. */
     static final double COMPRESS_AT = 0.8;
     static final int FAILS_BEFORE_SMALLER_CUT = 2;
-    /** Relative length the search distinguishes (of the largest stock dimension). */
-    static final double RELATIVE_PRECISION = 1e-6;
 
     private final NestRequest request;
     private final NestResult start;
@@ -70,8 +71,8 @@ public final class StripSearch {
         this.startParts = start.sheets().get(0).parts();
         double gap = request.rules().gap();
         double margin = request.rules().margin();
-        this.grow = gap > 0 ? gap / 2 + request.rules().chordTolerance() + precisionOf(start) : request.rules().chordTolerance();
-        this.precision = precisionOf(start);
+        this.grow = gap > 0 ? gap / 2 + request.rules().chordTolerance() + precisionOf(request, start) : request.rules().chordTolerance();
+        this.precision = precisionOf(request, start);
         this.x0 = margin - gap / 2;
         this.y0 = margin - gap / 2;
         this.y1 = coil.width() - margin + gap / 2;
@@ -95,12 +96,16 @@ public final class StripSearch {
             reach += shapes[i].reach;
         }
         double meanReach = n > 0 ? reach / n : 1;
-        this.measure = new OverlapMeasure(Math.max(precision, meanReach * 1e-3), precision);
+        this.measure = new OverlapMeasure(Math.max(precision, meanReach * FLOOR_SHARE), precision);
     }
 
-    private static double precisionOf(NestResult start) {
-        SheetLayout l = start.sheets().get(0);
-        return Math.max(((Coil) l.stock()).width(), l.usedLength()) * RELATIVE_PRECISION;
+    /**
+     * The length the search distinguishes: what the independent checker forgives at this strip's scale (so a
+     * crossing the search calls touching is one the checker accepts; with a gap, shapes are grown by as much).
+     */
+    private static double precisionOf(NestRequest request, NestResult start) {
+        NestPrecision p = NestPrecision.ofScale(NestPrecision.scaleOf(request.pieces(), request.stock()));
+        return p.checkTolerance(start.sheets().get(0).usedLength());
     }
 
     /**
