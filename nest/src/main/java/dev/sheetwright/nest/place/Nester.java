@@ -199,7 +199,7 @@ public final class Nester {
                 }
                 if (fixed) {
                     lay.run(cand, Math.min(from, valid));
-                } else if (!lay.run(cand, Math.min(from, valid), deadline)) {
+                } else if (lay.runUntil(cand, Math.min(from, valid), deadline) < n) {
                     break;
                 }
                 valid = n;
