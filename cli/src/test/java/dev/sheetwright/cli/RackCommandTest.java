@@ -283,7 +283,7 @@ class RackCommandTest {
                 "0", "--use-remnants", "--inventory", missing.toString());
 
         exit(2, run);
-        assertTrue(run.err().startsWith("error: --inventory " + missing + ": no inventory there"), run.err());
+        assertTrue(run.err().startsWith("error: inventory " + missing + ": no rack there"), run.err());
         assertFalse(Files.exists(missing));
         assertFalse(Files.exists(dir.resolve("out")));
     }
