@@ -16,7 +16,8 @@ import java.util.Set;
  *   <li>{@code once}: reserves every free galvanized remnant, settles a plan that cuts all it got, commits it;
  *       prints the used ids on one line (empty when it got none);</li>
  *   <li>{@code commit-and-hang}: commits the settled plan given as third argument, but stops for good after the
- *       first offcut is written (printing {@code writing}), so the test can kill it inside the transaction.</li>
+ *       first offcut is written (printing {@code writing}), so the test can kill it inside the transaction;</li>
+ *   <li>{@code count}: prints how many remnants are on the rack (to see that it could log in).</li>
  * </ul>
  */
 final class PlannerMain {
@@ -26,13 +27,18 @@ final class PlannerMain {
     private PlannerMain() {
     }
 
-    /** Arguments: mode, rack location, plan id. */
+    /** Arguments: mode, rack location, plan id (not for {@code count}). */
     public static void main(String[] args) throws Exception {
         RackLocation location = RackLocation.parse(args[1]);
         switch (args[0]) {
             case "drain" -> run(location, args[2]).forEach(System.out::println);
             case "once" -> System.out.println(String.join(" ", once(location, args[2])));
             case "commit-and-hang" -> commitAndHang(location, args[2]);
+            case "count" -> {
+                try (RemnantStore store = RemnantStore.open(location, false)) {
+                    System.out.println(store.list(RemnantFilter.any(), RemnantSort.ID).size());
+                }
+            }
             default -> throw new IllegalArgumentException("mode " + args[0]);
         }
     }

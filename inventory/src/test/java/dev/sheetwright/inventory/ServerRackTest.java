@@ -114,6 +114,41 @@ class ServerRackTest {
         }
     }
 
+    @Test
+    void open_passwordFromPgpasswordOrPgpassFile_whenTheUrlHasNone() throws Exception {
+        try (TestRack rack = TestRack.make(TestRack.Kind.POSTGRESQL, dir, "")) {
+            try (RemnantStore store = rack.open()) {
+                store.add(NewRemnant.manual(MaterialType.GALVANIZED, 24, RemnantOutline.rectangle(100, 100), ""));
+            }
+            RackLocation.Server s = (RackLocation.Server) rack.location;
+            String url = s.toString(); // no password in it
+
+            assertEquals("1", count(url, java.util.Map.of("PGPASSWORD", s.password())));
+
+            Path pgpass = java.nio.file.Files.writeString(dir.resolve("pgpass"), s.host() + ":" + s.port() + ":"
+                    + s.database() + ":" + s.user() + ":" + s.password() + "\n");
+            java.nio.file.Files.setPosixFilePermissions(pgpass, java.nio.file.attribute.PosixFilePermissions
+                    .fromString("rw-------"));
+            assertEquals("1", count(url, java.util.Map.of("PGPASSFILE", pgpass.toString())));
+        }
+    }
+
+    /** Runs the {@code count} planner mode in a child JVM with exactly these password variables. */
+    private static String count(String url, java.util.Map<String, String> env) throws Exception {
+        String javaBin = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        ProcessBuilder pb = new ProcessBuilder(javaBin, "-cp", System.getProperty("java.class.path"),
+                PlannerMain.class.getName(), "count", url).redirectErrorStream(true);
+        pb.environment().remove("PGPASSWORD");
+        pb.environment().remove("PGPASSFILE");
+        pb.environment().put("HOME", System.getProperty("java.io.tmpdir")); // no user ~/.pgpass
+        pb.environment().putAll(env);
+        Process p = pb.start();
+        String out = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS), "child timed out");
+        assertEquals(0, p.exitValue(), out);
+        return out.strip();
+    }
+
     private static void pgCtl(String bin, String data, String... args) {
         List<String> cmd = new java.util.ArrayList<>(List.of("runuser", "-u", "postgres", "--", bin + "/pg_ctl",
                 "-D", data));
