@@ -53,7 +53,9 @@ class ConcurrentPlannersTest {
 
     @AfterEach
     void drop() {
-        rack.close();
+        if (rack != null) {
+            rack.close();
+        }
     }
 
     private void fill(int count) {

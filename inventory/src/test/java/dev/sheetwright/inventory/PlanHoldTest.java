@@ -52,7 +52,9 @@ class PlanHoldTest {
 
     @AfterEach
     void drop() {
-        rack.close();
+        if (rack != null) {
+            rack.close();
+        }
     }
 
     private static NewRemnant galv(double w, double h) {

@@ -48,7 +48,9 @@ class RemnantReservationTest {
 
     @AfterEach
     void drop() {
-        rack.close();
+        if (rack != null) {
+            rack.close();
+        }
     }
 
     private static NewRemnant galv(double w, double h) {

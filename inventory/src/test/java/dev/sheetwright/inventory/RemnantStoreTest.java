@@ -38,7 +38,9 @@ class RemnantStoreTest {
 
     @AfterEach
     void drop() {
-        rack.close();
+        if (rack != null) {
+            rack.close();
+        }
     }
 
     private static NewRemnant galv(double w, double h, String location) {
