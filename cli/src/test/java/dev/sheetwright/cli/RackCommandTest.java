@@ -37,7 +37,8 @@ class RackCommandTest {
     private static final double EPS = 1e-6;
     private static final double GAP = 0.25;
     private static final GeometryFactory GEOMETRY = new GeometryFactory();
-    private static final String JOB = """
+    /** A small galvanized job nested against the rack (an invented scenario); shared by the rack tests. */
+    static final String JOB = """
             version: 1
             job: Rack test
             units: in

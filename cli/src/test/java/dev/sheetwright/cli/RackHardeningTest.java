@@ -24,17 +24,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** The rack refuses what it must not believe: bad remnants, edited plans, wrong racks; and a plan can be released. */
 class RackHardeningTest {
-    private static final String JOB = """
-            version: 1
-            job: Rack test
-            units: in
-            material: {type: galvanized, gauge: 24}
-            cutting: {process: plasma, kerf: 0.06, gap: 1/4, margin: 3/8, rotation: 90}
-            stock:
-              sheets: [{size: 48x120, cost: 62.50}]
-            fittings:
-              - {id: C6, type: pipe, diameter: 6, length: 3, qty: 4}
-            """;
+    private static final String JOB = RackCommandTest.JOB;
 
     @TempDir
     Path dir;

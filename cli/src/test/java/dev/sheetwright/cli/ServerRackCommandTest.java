@@ -27,17 +27,7 @@ import org.junit.jupiter.api.io.TempDir;
  * starts one); skipped without it unless {@code SHEETWRIGHT_REQUIRE_EXTERNAL=1}.
  */
 class ServerRackCommandTest {
-    private static final String JOB = """
-            version: 1
-            job: Server rack test
-            units: in
-            material: {type: galvanized, gauge: 24}
-            cutting: {process: plasma, kerf: 0.06, gap: 1/4, margin: 3/8, rotation: 90}
-            stock:
-              sheets: [{size: 48x120, cost: 62.50}]
-            fittings:
-              - {id: C6, type: pipe, diameter: 6, length: 3, qty: 4}
-            """;
+    private static final String JOB = RackCommandTest.JOB;
 
     @TempDir
     Path dir;

@@ -66,29 +66,27 @@ final class SqliteBackend implements RackBackend {
 
     @Override
     public void configure(Connection db) throws SQLException {
-        try (Statement s = db.createStatement()) {
-            s.execute("PRAGMA journal_mode=WAL");
-        }
+        execute(db, "PRAGMA journal_mode=WAL");
     }
 
     @Override
     public void begin(Connection db) throws SQLException {
-        try (Statement s = db.createStatement()) {
-            s.execute("BEGIN IMMEDIATE");
-        }
+        execute(db, "BEGIN IMMEDIATE");
     }
 
     @Override
     public void commit(Connection db) throws SQLException {
-        try (Statement s = db.createStatement()) {
-            s.execute("COMMIT");
-        }
+        execute(db, "COMMIT");
     }
 
     @Override
     public void rollback(Connection db) throws SQLException {
+        execute(db, "ROLLBACK");
+    }
+
+    private static void execute(Connection db, String sql) throws SQLException {
         try (Statement s = db.createStatement()) {
-            s.execute("ROLLBACK");
+            s.execute(sql);
         }
     }
 

@@ -1,7 +1,6 @@
 package dev.sheetwright.cli.command;
 
 import dev.sheetwright.cli.ExitCodes;
-import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.rack.PlanReport;
 import dev.sheetwright.cli.rack.RackCommit;
 import dev.sheetwright.cli.rack.RackPlan;
@@ -43,8 +42,7 @@ public final class CommitCommand implements Callable<Integer> {
     public Integer call() {
         return ExitCodes.run(spec, () -> {
             RackPlan plan = RackPlan.read(out);
-            try (RemnantStore store = RemnantStore.open(InventoryOption.locate(
-                    inventory != null ? inventory : plan.inventory()), false)) {
+            try (RemnantStore store = plan.openRack(inventory)) {
                 PlanReport.committed(spec.commandLine().getOut(), plan, RackCommit.commit(store, plan, location));
             }
             return ExitCodes.OK;

@@ -1,7 +1,6 @@
 package dev.sheetwright.cli.command;
 
 import dev.sheetwright.cli.ExitCodes;
-import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.rack.PlanReport;
 import dev.sheetwright.cli.rack.RackPlan;
 import dev.sheetwright.inventory.RemnantStore;
@@ -36,8 +35,7 @@ public final class ReleaseCommand implements Callable<Integer> {
     public Integer call() {
         return ExitCodes.run(spec, () -> {
             RackPlan plan = RackPlan.read(out);
-            try (RemnantStore store = RemnantStore.open(InventoryOption.locate(
-                    inventory != null ? inventory : plan.inventory()), false)) {
+            try (RemnantStore store = plan.openRack(inventory)) {
                 int back = store.releasePlan(plan.id());
                 PlanReport.released(spec.commandLine().getOut(), plan, back);
             }

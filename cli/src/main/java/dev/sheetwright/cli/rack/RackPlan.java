@@ -45,6 +45,15 @@ public record RackPlan(String id, String inventory, String job, LengthUnit unit,
         offcuts = List.copyOf(offcuts);
     }
 
+    /**
+     * Opens the rack this plan holds remnants in: {@code inventory} when given (an {@code --inventory} value), else
+     * the one it was made against (whose password, if any, comes from PGPASSWORD or ~/.pgpass).
+     */
+    public dev.sheetwright.inventory.RemnantStore openRack(String inventory) {
+        return dev.sheetwright.inventory.RemnantStore.open(dev.sheetwright.cli.mixin.InventoryOption.locate(
+                inventory != null ? inventory : this.inventory), false);
+    }
+
     /** The offcut planned for sheet {@code sheet} (from 1), or null. */
     public PlannedOffcut offcutOfSheet(int sheet) {
         return offcuts.stream().filter(o -> o.sheet() == sheet).findFirst().orElse(null);
