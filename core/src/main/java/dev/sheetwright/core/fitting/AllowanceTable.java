@@ -41,6 +41,24 @@ public final class AllowanceTable {
      */
     static final double TAP_FLANGE = 0.5;
 
+    // ---- Rectangular work (trade-reference §13.1, §7.2, §7.3). ----
+    /**
+     * Pittsburgh lock, male flange on a curved cheek edge (elbow and offset cheeks) 3/16 in; straight edges take
+     * {@link #PITTSBURGH_FLANGE} (common practice, trade-reference §13.1).
+     */
+    static final double PITTSBURGH_CURVED_FLANGE = 0.1875;
+    /** Drive-slip edge: a 180 degree hem made from about 1/2 in of extra metal (common practice, §7.3). */
+    static final double DRIVE_HEM = 0.5;
+    /** Edge entering a flat S slip: about 1/2 in beyond the net line so the S can grip (common practice, §7.3). */
+    static final double S_SLIP_EDGE = 0.5;
+    /** Flange or tabs on a rectangular tap's main edge, about 1 in (common practice, trade-reference §13.7). */
+    static final double RECT_TAP_FLANGE = 1.0;
+    /**
+     * Flanges of a rectangular end cap turned over the duct end, 1 in (common practice: same width as the tap
+     * flange of trade-reference §13.7; the cap itself is W x D plus flanges, §13.7).
+     */
+    static final double END_CAP_FLANGE = 1.0;
+
     private final LengthUnit unit;
 
     private AllowanceTable(LengthUnit unit) {
@@ -108,6 +126,78 @@ public final class AllowanceTable {
         return new EndAllowance(EndKind.FLANGE, inches(TAP_FLANGE));
     }
 
+    // ---- Rectangular work. ----
+
+    /** The longitudinal seam of rectangular fittings when neither the fitting nor the job gives one: Pittsburgh. */
+    public SeamAllowance defaultRectSeam() {
+        return seam(SeamKind.PITTSBURGH, 0);
+    }
+
+    /**
+     * The width of the male edge of {@code seam} where it runs along a curved cheek edge: the curved-edge
+     * Pittsburgh flange (3/16 in, common practice §13.1); other seams keep their straight male width.
+     */
+    public double curvedEdgeFlange(SeamAllowance seam) {
+        return seam.kind() == SeamKind.PITTSBURGH ? inches(PITTSBURGH_CURVED_FLANGE) : seam.left();
+    }
+
+    /** True for the longitudinal seams rectangular fittings take: {@code pittsburgh}, {@code snap-lock}, {@code none}. */
+    public static boolean rectangularSeam(SeamKind kind) {
+        return kind == SeamKind.PITTSBURGH || kind == SeamKind.SNAP_LOCK || kind == SeamKind.NONE;
+    }
+
+    /** Reads a rectangular longitudinal seam: {@code pittsburgh}, {@code snap-lock} or {@code none}. */
+    public SeamAllowance parseRectSeam(String text) {
+        SeamAllowance s;
+        try {
+            s = parseSeam(text);
+        } catch (IllegalArgumentException e) {
+            s = null;
+        }
+        if (s == null || !rectangularSeam(s.kind())) {
+            throw new IllegalArgumentException("'" + text + "' is not a rectangular seam: use pittsburgh, snap-lock"
+                    + " or none");
+        }
+        return s;
+    }
+
+    /**
+     * Reads a transverse connector of a rectangular end: {@code none}, {@code slip [W]}, {@code drive [W]} or
+     * {@code flange W} (a formed-on flange's width comes from the shop's roll-former, so it must be given).
+     */
+    public EndAllowance parseRectEnd(String text) {
+        String[] words = split(text);
+        EndKind kind = switch (words[0]) {
+            case "none" -> EndKind.NONE;
+            case "slip" -> EndKind.SLIP;
+            case "drive" -> EndKind.DRIVE;
+            case "flange" -> EndKind.FLANGE;
+            default -> throw new IllegalArgumentException("unknown rectangular end '" + text
+                    + "': use none, slip [W], drive [W] or flange W");
+        };
+        if (kind == EndKind.NONE) {
+            if (words.length > 1) {
+                throw new IllegalArgumentException("end 'none' takes no width (got '" + text + "')");
+            }
+            return EndAllowance.NONE;
+        }
+        if (kind == EndKind.FLANGE && words.length == 1) {
+            throw new IllegalArgumentException("'flange' needs its width (flange W): a formed-on flange is as wide as"
+                    + " the shop's roll-former makes it");
+        }
+        return new EndAllowance(kind, words.length > 1 ? positive(words[1], text) : defaultEnd(kind));
+    }
+
+    /** The flange on a rectangular tap's main edge when the job gives none, 1 in (common practice, §13.7). */
+    public EndAllowance defaultRectTapFlange() {
+        return new EndAllowance(EndKind.FLANGE, inches(RECT_TAP_FLANGE));
+    }
+
+    /** The flange width of an end cap when the job gives none, 1 in (common practice, §13.7). */
+    public double defaultCapFlange() {
+        return inches(END_CAP_FLANGE);
+    }
+
     /**
      * Reads an end allowance: {@code none}, {@code lap [W]}, {@code bead [W]}, {@code crimp [W]},
      * {@code flange [W]}.
@@ -120,9 +210,10 @@ public final class AllowanceTable {
                 kind = k;
             }
         }
-        if (kind == null) {
+        if (kind == null || kind.rectangularOnly()) {
             throw new IllegalArgumentException("unknown end allowance '" + text
-                    + "': use none, lap W, bead W, crimp W or flange W");
+                    + "': use none, lap W, bead W, crimp W or flange W"
+                    + (kind == null ? "" : " (" + kind.word() + " is for rectangular duct ends)"));
         }
         if (kind == EndKind.NONE) {
             if (words.length > 1) {
@@ -141,6 +232,8 @@ public final class AllowanceTable {
             case BEAD -> inches(BEAD_END);
             case CRIMP -> inches(CRIMP_END);
             case FLANGE -> inches(TAP_FLANGE);
+            case SLIP -> inches(S_SLIP_EDGE);
+            case DRIVE -> inches(DRIVE_HEM);
         };
     }
 
