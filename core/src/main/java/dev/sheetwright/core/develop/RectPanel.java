@@ -24,8 +24,16 @@ final class RectPanel {
     private RectPanel() {
     }
 
-    /** Where the allowances go on a panel. */
-    record Edges(double left, double right, EndAllowance bottom, EndAllowance top, boolean notch) {
+    /**
+     * Where the allowances go on a panel; {@code bottomTabs} (start, end along the bottom edge) when the bottom
+     * end carries tabs rather than a strip.
+     */
+    record Edges(double left, double right, EndAllowance bottom, EndAllowance top, boolean notch,
+            List<double[]> bottomTabs) {
+
+        Edges(double left, double right, EndAllowance bottom, EndAllowance top, boolean notch) {
+            this(left, right, bottom, top, notch, List.of());
+        }
     }
 
     /**
@@ -35,7 +43,6 @@ final class RectPanel {
      */
     static Pattern build(String fitting, String piece, int count, double[] faces, double length, Edges e,
             List<Mark> extraMarks, Tolerance tol) {
-        List<Point2> net = new ArrayList<>();
         List<Double> bends = new ArrayList<>();
         double x = 0;
         for (int i = 0; i < faces.length; i++) {
@@ -45,35 +52,59 @@ final class RectPanel {
             }
         }
         double s = x;
-        int nb = bends.size();
-        int n = 4 + 2 * nb;
+        double eb = e.bottom().width();
+        double et = e.top().width();
+        List<Point2> net = new ArrayList<>();
+        List<Double> w = new ArrayList<>();
+        List<Boolean> corner = new ArrayList<>();
+        List<Boolean> bend = new ArrayList<>();
+        if (!e.bottomTabs().isEmpty()) {
+            if (!bends.isEmpty()) {
+                throw new IllegalArgumentException("tabs go on a single flat face, not across bends");
+            }
+            TabbedEdge.append(net, w, new Point2(0, 0), new Point2(s, 0), e.bottomTabs(), eb);
+            for (int i = 0; i < net.size(); i++) {
+                corner.add(i == 0 && e.notch());
+                bend.add(false);
+            }
+        } else {
+            net.add(new Point2(0, 0));
+            corner.add(e.notch());
+            bend.add(false);
+            w.add(eb);
+            for (double b : bends) {
+                net.add(new Point2(b, 0));
+                corner.add(false);
+                bend.add(e.notch() && eb > 0);
+                w.add(eb);
+            }
+        }
+        net.add(new Point2(s, 0));
+        corner.add(e.notch());
+        bend.add(false);
+        w.add(e.right());
+        net.add(new Point2(s, length));
+        corner.add(e.notch());
+        bend.add(false);
+        w.add(et);
+        for (int i = bends.size() - 1; i >= 0; i--) {
+            net.add(new Point2(bends.get(i), length));
+            corner.add(false);
+            bend.add(e.notch() && et > 0);
+            w.add(et);
+        }
+        net.add(new Point2(0, length));
+        corner.add(e.notch());
+        bend.add(false);
+        w.add(e.left());
+        int n = net.size();
         double[] widths = new double[n];
         boolean[] notch = new boolean[n];
         boolean[] vee = new boolean[n];
-        net.add(new Point2(0, 0));
-        for (double b : bends) {
-            net.add(new Point2(b, 0));
-        }
-        net.add(new Point2(s, 0));
-        net.add(new Point2(s, length));
-        for (int i = nb - 1; i >= 0; i--) {
-            net.add(new Point2(bends.get(i), length));
-        }
-        net.add(new Point2(0, length));
-        double eb = e.bottom().width();
-        double et = e.top().width();
-        for (int i = 0; i <= nb; i++) {
-            widths[i] = eb;
-        }
-        widths[nb + 1] = e.right();
-        for (int i = nb + 2; i < n - 1; i++) {
-            widths[i] = et;
-        }
-        widths[n - 1] = e.left();
-        notch[0] = notch[nb + 1] = notch[nb + 2] = notch[n - 1] = e.notch();
-        for (int i = 1; i <= nb; i++) {
-            vee[i] = e.notch() && eb > 0;
-            vee[nb + 2 + i] = e.notch() && et > 0;
+        for (int i = 0; i < n; i++) {
+            widths[i] = w.get(i);
+            notch[i] = corner.get(i);
+            vee[i] = bend.get(i);
         }
         List<Point2> cut = AllowanceOutline.offset(net, widths, notch, vee);
         if (!AllowanceOutline.isSimple(cut)) {
@@ -104,13 +135,20 @@ final class RectPanel {
      */
     static Pattern wrapper(String fitting, String piece, int count, double depth, double length,
             dev.sheetwright.core.fitting.Allowances a, List<Double> crossAt, MarkKind crossKind, Tolerance tol) {
+        return wrapper(fitting, piece, count, depth, length, a, crossAt, crossKind, List.of(), tol);
+    }
+
+    /** As above, with tabs (start, end across the wrapper) instead of a strip on its first end. */
+    static Pattern wrapper(String fitting, String piece, int count, double depth, double length,
+            dev.sheetwright.core.fitting.Allowances a, List<Double> crossAt, MarkKind crossKind,
+            List<double[]> firstEndTabs, Tolerance tol) {
         double pocket = a.seam().right();
         List<Mark> cross = new ArrayList<>();
         for (double y : crossAt) {
             cross.add(new Mark(crossKind, new Line(new Point2(0, y), new Point2(depth, y))));
         }
         return build(fitting, piece, count, new double[] {depth}, length,
-                new Edges(pocket, pocket, a.endA(), a.endB(), a.notch()), cross, tol);
+                new Edges(pocket, pocket, a.endA(), a.endB(), a.notch(), firstEndTabs), cross, tol);
     }
 
     /**

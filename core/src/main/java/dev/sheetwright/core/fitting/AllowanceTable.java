@@ -53,6 +53,12 @@ public final class AllowanceTable {
     static final double S_SLIP_EDGE = 0.5;
     /** Flange or tabs on a rectangular tap's main edge, about 1 in (common practice, trade-reference §13.7). */
     static final double RECT_TAP_FLANGE = 1.0;
+    /** Tabs on a tap's main edge: each 1 in along the edge (common practice; depth as the flange, §13.7). */
+    static final double TAB_LENGTH = 1.0;
+    /** Tabs at most 6 in apart, centre to centre (common practice). */
+    static final double TAB_PITCH = 6.0;
+    /** The end tabs 1/2 in in from the corners, clear of the corner seams (common practice). */
+    static final double TAB_INSET = 0.5;
     /**
      * Flanges of a rectangular end cap turned over the duct end, 1 in (common practice: same width as the tap
      * flange of trade-reference §13.7; the cap itself is W x D plus flanges, §13.7).
@@ -172,8 +178,9 @@ public final class AllowanceTable {
             case "slip" -> EndKind.SLIP;
             case "drive" -> EndKind.DRIVE;
             case "flange" -> EndKind.FLANGE;
+            case "tabs" -> EndKind.TABS;
             default -> throw new IllegalArgumentException("unknown rectangular end '" + text
-                    + "': use none, slip [W], drive [W] or flange W");
+                    + "': use none, slip [W], drive [W], flange W (or, on a tap's main edge, tabs [W])");
         };
         if (kind == EndKind.NONE) {
             if (words.length > 1) {
@@ -191,6 +198,29 @@ public final class AllowanceTable {
     /** The flange on a rectangular tap's main edge when the job gives none, 1 in (common practice, §13.7). */
     public EndAllowance defaultRectTapFlange() {
         return new EndAllowance(EndKind.FLANGE, inches(RECT_TAP_FLANGE));
+    }
+
+    /**
+     * Where tabs go along a straight edge of length {@code edge}: pairs of (start, end) distances from the edge's
+     * start, {@link #TAB_LENGTH} long, the end ones {@link #TAB_INSET} in from the corners and at most
+     * {@link #TAB_PITCH} apart; one tab in the middle when the edge is short (common practice).
+     */
+    public double[][] tabs(double edge) {
+        double len = inches(TAB_LENGTH);
+        double inset = inches(TAB_INSET);
+        double pitch = inches(TAB_PITCH);
+        if (edge < 2 * inset + 2 * len) {
+            double l = Math.min(len, edge / 2);
+            return new double[][] {{(edge - l) / 2, (edge + l) / 2}};
+        }
+        double span = edge - 2 * inset - len; // first tab start to last tab start
+        int n = Math.max(2, (int) Math.ceil(span / pitch) + 1);
+        double[][] out = new double[n][];
+        for (int i = 0; i < n; i++) {
+            double start = inset + span * i / (n - 1);
+            out[i] = new double[] {start, start + len};
+        }
+        return out;
     }
 
     /** The flange width of an end cap when the job gives none, 1 in (common practice, §13.7). */
@@ -234,6 +264,7 @@ public final class AllowanceTable {
             case FLANGE -> inches(TAP_FLANGE);
             case SLIP -> inches(S_SLIP_EDGE);
             case DRIVE -> inches(DRIVE_HEM);
+            case TABS -> inches(RECT_TAP_FLANGE);
         };
     }
 

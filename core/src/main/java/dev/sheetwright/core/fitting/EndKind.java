@@ -14,7 +14,9 @@ public enum EndKind {
     /** Rectangular duct edge that enters a flat S slip: left raw beyond the net line so the S can grip (§7.3). */
     SLIP("slip"),
     /** Rectangular duct edge that receives a drive cleat: turned back in a 180 degree hem (§7.3). */
-    DRIVE("drive");
+    DRIVE("drive"),
+    /** Tabs turned out along a rectangular tap's main edge for fastening to the main (§13.7). */
+    TABS("tabs");
 
     private final String word;
 
@@ -28,6 +30,6 @@ public enum EndKind {
 
     /** True for the connectors that belong to rectangular duct only. */
     public boolean rectangularOnly() {
-        return this == SLIP || this == DRIVE;
+        return this == SLIP || this == DRIVE || this == TABS;
     }
 }

@@ -20,6 +20,10 @@ final class RectFittings {
 
     static void requireRectEnd(String id, String field, EndAllowance end) {
         EndKind k = end.kind();
+        if (k == EndKind.TABS) {
+            throw new FittingException(id, field, "tabs go on a tap's main edge only; a duct end takes none, slip,"
+                    + " drive or flange W");
+        }
         if (k != EndKind.NONE && k != EndKind.SLIP && k != EndKind.DRIVE && k != EndKind.FLANGE) {
             throw new FittingException(id, field, "'" + k.word() + "' is not a rectangular connector: use none,"
                     + " slip, drive or flange W");

@@ -5,7 +5,7 @@ package dev.sheetwright.core.fitting;
  * airflow), height above the main; the upstream side runs at 45 degrees over its lowest {@code entry}, so the
  * opening on the main is (width + entry) x depth. {@code entry: 0} is a straight tap.
  *
- * @param allowances seam on the four corner seams; {@code endA} on the main edge (a flange), {@code endB} the
+ * @param allowances seam on the four corner seams; {@code endA} on the main edge (a flange or tabs), {@code endB} the
  *     connector on the top end
  */
 public record ShoeTapSpec(String id, int qty, double width, double depth, double height, double entry,
@@ -29,8 +29,10 @@ public record ShoeTapSpec(String id, int qty, double width, double depth, double
             throw new FittingException(id, "allowances.seam", "'" + allowances.seam().kind().word()
                     + "' is not a rectangular seam: use pittsburgh, snap-lock or none");
         }
-        if (allowances.endA().kind() != EndKind.FLANGE && allowances.endA().kind() != EndKind.NONE) {
-            throw new FittingException(id, "allowances.ends.main", "the main edge takes flange W or none, got "
+        EndKind main = allowances.endA().kind();
+        if (main != EndKind.FLANGE && main != EndKind.TABS && main != EndKind.NONE) {
+            throw new FittingException(id, "allowances.ends.main", "the main edge takes flange W, tabs [W] or none,"
+                    + " got "
                     + allowances.endA().kind().word());
         }
         RectFittings.requireRectEnd(id, "allowances.ends.top", allowances.endB());

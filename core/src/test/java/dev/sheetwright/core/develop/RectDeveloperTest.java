@@ -230,6 +230,21 @@ class RectDeveloperTest {
     }
 
     @Test
+    void shoeTap_tabsOnTheMainEdge() {
+        // §13.7: tabs of about 1 in (common practice) on the main edge; 1 in long, ends 1/2 in from the corners,
+        // at most 6 in apart (common practice): 3 tabs on the cheek's 12 1/2 in main edge, 2 on the 8 in wrappers
+        Allowances a = new Allowances(SeamAllowance.NONE, TABLE.parseRectEnd("tabs"), EndAllowance.NONE, false);
+        Development d = ShoeTapDeveloper.develop(new ShoeTapSpec("S", 1, 10, 8, 6, 2.5, a), CTX);
+        assertEquals(63.125 + 3 * 1 * 1, piece(d, "cheek").area(), EPS4);
+        assertEquals(8 * 6 + 2 * 1 * 1, piece(d, "back").area(), EPS4);
+        assertEquals(6 + 1, piece(d, "back").bounds().height(), EPS4);
+        FittingException e = assertThrows(FittingException.class, () -> new RectDuctSpec("D", 1, 24, 12, 48,
+                RectConstruction.WRAP, new Allowances(SeamAllowance.NONE, TABLE.parseRectEnd("tabs"),
+                        EndAllowance.NONE, false)));
+        assertEquals("allowances.ends", e.field());
+    }
+
+    @Test
     void pittsburghDefaults_fromTheTable() {
         // §13.1 (common practice): pocket 1 in, flange 1/4 in on a straight edge, 3/16 in on a curved edge
         SeamAllowance p = TABLE.defaultRectSeam();

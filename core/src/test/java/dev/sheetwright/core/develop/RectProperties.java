@@ -358,7 +358,10 @@ class RectProperties {
                     t.offsetX(), t.offsetY(), t.construction(), a);
         }
         if (s instanceof ShoeTapSpec t) {
-            EndAllowance main = a.endA().kind() == EndKind.FLANGE ? a.endA() : TABLE.defaultRectTapFlange();
+            // the main edge takes a flange or tabs: a drive end here becomes tabs of the same width
+            EndAllowance main = a.endA().kind() == EndKind.FLANGE ? a.endA()
+                    : a.endA().kind() == EndKind.DRIVE ? new EndAllowance(EndKind.TABS, a.endA().width())
+                    : TABLE.defaultRectTapFlange();
             return new ShoeTapSpec(t.id(), 1, t.width(), t.depth(), t.height(), t.entry(),
                     new Allowances(a.seam(), main, a.endB(), a.notch()));
         }
