@@ -72,6 +72,29 @@ final class AllowanceOutline {
         return out;
     }
 
+    /**
+     * The cut outline of a rectangular piece: {@link #offset(List, double[], boolean[], boolean[])} over lists
+     * ({@code vee} may be null for none), refused naming the piece when the allowances overlap.
+     */
+    static Contour cut(String fitting, String piece, List<Point2> net, List<Double> widths, List<Boolean> notch,
+            List<Boolean> vee, Tolerance tol) {
+        int n = net.size();
+        double[] w = new double[n];
+        boolean[] nt = new boolean[n];
+        boolean[] v = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            w[i] = widths.get(i);
+            nt[i] = notch.get(i);
+            v[i] = vee != null && vee.get(i);
+        }
+        List<Point2> out = offset(net, w, nt, v);
+        if (!isSimple(net) || !isSimple(out)) {
+            throw new dev.sheetwright.core.fitting.FittingException(fitting, "allowances", "the allowances of piece '"
+                    + piece + "' overlap (or run past a corner or bend); make them narrower");
+        }
+        return contour(out, tol);
+    }
+
     /** Outward normal of a counter-clockwise outline's edge running in direction {@code d}. */
     private static Point2 outward(Point2 d) {
         return new Point2(d.y(), -d.x());

@@ -5,6 +5,7 @@ import dev.sheetwright.core.fitting.Allowances;
 import dev.sheetwright.core.fitting.FittingException;
 import dev.sheetwright.core.fitting.RectElbowSpec;
 import dev.sheetwright.core.geom.Arc;
+import dev.sheetwright.core.geom.Contour;
 import dev.sheetwright.core.geom.Edge;
 import dev.sheetwright.core.geom.Line;
 import dev.sheetwright.core.geom.Mark;
@@ -124,16 +125,7 @@ public final class RectElbowDeveloper {
         } else {
             net.remove(net.size() - 1); // the throat is a point: the end lines meet at the origin
         }
-        double[] wd = widths.stream().mapToDouble(Double::doubleValue).toArray();
-        boolean[] nt = new boolean[notch.size()];
-        for (int i = 0; i < nt.length; i++) {
-            nt[i] = notch.get(i);
-        }
-        List<Point2> cut = AllowanceOutline.offset(net, wd, nt);
-        if (!AllowanceOutline.isSimple(cut)) {
-            throw new FittingException(spec.id(), "allowances", "the allowances overlap on the cheek; make them"
-                    + " narrower or the legs longer");
-        }
+        Contour outline = AllowanceOutline.cut(spec.id(), "cheek", net, widths, notch, null, ctx.tolerance());
         List<Mark> marks = new ArrayList<>();
         int m = net.size();
         for (int i = 0; i < m; i++) {
@@ -147,8 +139,7 @@ public final class RectElbowDeveloper {
             }
         }
         marks.add(new Mark(MarkKind.LAYOUT, new Line(Point2.ORIGIN, h)));
-        Pattern cheek = new Pattern(spec.id(), "cheek", 2, AllowanceOutline.contour(cut, ctx.tolerance()),
-                List.of(), marks, new Point2(w / 2, (heelRun - e) / 2));
+        Pattern cheek = new Pattern(spec.id(), "cheek", 2, outline, List.of(), marks, new Point2(w / 2, (heelRun - e) / 2));
         double heelLen = 2 * (e + heelRun);
         double throatLen = 2 * e;
         double mitre = w / Math.cos(a / 2);

@@ -2,7 +2,7 @@ package dev.sheetwright.core.develop;
 
 import dev.sheetwright.core.fitting.EndAllowance;
 import dev.sheetwright.core.fitting.EndKind;
-import dev.sheetwright.core.fitting.FittingException;
+import dev.sheetwright.core.geom.Contour;
 import dev.sheetwright.core.geom.Line;
 import dev.sheetwright.core.geom.Mark;
 import dev.sheetwright.core.geom.MarkKind;
@@ -97,20 +97,7 @@ final class RectPanel {
         corner.add(e.notch());
         bend.add(false);
         w.add(e.left());
-        int n = net.size();
-        double[] widths = new double[n];
-        boolean[] notch = new boolean[n];
-        boolean[] vee = new boolean[n];
-        for (int i = 0; i < n; i++) {
-            widths[i] = w.get(i);
-            notch[i] = corner.get(i);
-            vee[i] = bend.get(i);
-        }
-        List<Point2> cut = AllowanceOutline.offset(net, widths, notch, vee);
-        if (!AllowanceOutline.isSimple(cut)) {
-            throw new FittingException(fitting, "allowances.ends", "the end allowances (" + eb + ", " + et
-                    + ") are too wide for the notches at the corners and bends of piece '" + piece + "'");
-        }
+        Contour outline = AllowanceOutline.cut(fitting, piece, net, w, corner, bend, tol);
         List<Mark> marks = new ArrayList<>();
         for (double b : bends) {
             marks.add(new Mark(MarkKind.BEND, new Line(new Point2(b, 0), new Point2(b, length))));
@@ -124,7 +111,7 @@ final class RectPanel {
         endMarks(e.bottom(), List.of(new Point2(0, 0), new Point2(s, 0)), marks, tol);
         endMarks(e.top(), List.of(new Point2(s, length), new Point2(0, length)), marks, tol);
         marks.addAll(extraMarks);
-        return new Pattern(fitting, piece, count, AllowanceOutline.contour(cut, tol), List.of(), marks,
+        return new Pattern(fitting, piece, count, outline, List.of(), marks,
                 new Point2(s / 2, length / 2));
     }
 

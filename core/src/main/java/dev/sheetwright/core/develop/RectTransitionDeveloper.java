@@ -4,6 +4,7 @@ import dev.sheetwright.core.fitting.Allowances;
 import dev.sheetwright.core.fitting.FittingException;
 import dev.sheetwright.core.fitting.RectConstruction;
 import dev.sheetwright.core.fitting.RectTransitionSpec;
+import dev.sheetwright.core.geom.Contour;
 import dev.sheetwright.core.geom.Line;
 import dev.sheetwright.core.geom.Mark;
 import dev.sheetwright.core.geom.MarkKind;
@@ -137,10 +138,9 @@ public final class RectTransitionDeveloper {
         Allowances a = spec.allowances();
         double seam = f.cheek() ? a.seam().left() : a.seam().right();
         List<Point2> net = flat(f);
-        double[] widths = {a.endA().width(), seam, a.endB().width(), seam};
+        List<Double> widths = List.of(a.endA().width(), seam, a.endB().width(), seam);
         boolean n = a.notch();
-        Pattern p = outline(spec, f.name(), net, widths, new boolean[] {n, n, n, n}, new boolean[4],
-                List.of(), tol);
+        Pattern p = outline(spec, f.name(), net, widths, List.of(n, n, n, n), null, List.of(), tol);
         return new DevelopedPiece(p, new Layout(faceValues("", f, net), List.of()));
     }
 
@@ -156,10 +156,10 @@ public final class RectTransitionDeveloper {
         List<Point2> net = List.of(c.get(0), c.get(1), wb1, wb2, c.get(2), c.get(3));
         double ea = a.endA().width();
         double eb = a.endB().width();
-        double[] widths = {ea, ea, a.seam().right(), eb, eb, a.seam().left()};
+        List<Double> widths = List.of(ea, ea, a.seam().right(), eb, eb, a.seam().left());
         boolean n = a.notch();
-        boolean[] notch = {n, false, n, n, false, n};
-        boolean[] vee = {false, n && ea > 0, false, false, n && eb > 0, false};
+        List<Boolean> notch = List.of(n, false, n, n, false, n);
+        List<Boolean> vee = List.of(false, n && ea > 0, false, false, n && eb > 0, false);
         Pattern p = outline(spec, name, net, widths, notch, vee,
                 List.of(new Mark(MarkKind.BEND, new Line(c.get(1), c.get(2)))), tol);
         List<LayoutValue> values = new ArrayList<>(faceValues(cheek.name() + ".", cheek, c));
@@ -170,13 +170,9 @@ public final class RectTransitionDeveloper {
         return new DevelopedPiece(p, new Layout(values, List.of()));
     }
 
-    private static Pattern outline(RectTransitionSpec spec, String name, List<Point2> net, double[] widths,
-            boolean[] notch, boolean[] vee, List<Mark> extra, Tolerance tol) {
-        List<Point2> cut = AllowanceOutline.offset(net, widths, notch, vee);
-        if (!AllowanceOutline.isSimple(net) || !AllowanceOutline.isSimple(cut)) {
-            throw new FittingException(spec.id(), "allowances", "the allowances of piece '" + name
-                    + "' overlap; make them narrower");
-        }
+    private static Pattern outline(RectTransitionSpec spec, String name, List<Point2> net, List<Double> widths,
+            List<Boolean> notch, List<Boolean> vee, List<Mark> extra, Tolerance tol) {
+        Contour cut = AllowanceOutline.cut(spec.id(), name, net, widths, notch, vee, tol);
         List<Mark> marks = new ArrayList<>(extra);
         int m = net.size();
         int half = m / 2;
@@ -184,7 +180,7 @@ public final class RectTransitionDeveloper {
         RectPanel.endMarks(a.endA(), net.subList(0, half), marks, tol);
         RectPanel.endMarks(a.endB(), net.subList(half, m), marks, tol);
         for (int i = 0; i < m; i++) {
-            if ((i == half - 1 || i == m - 1) && widths[i] > 0) {
+            if ((i == half - 1 || i == m - 1) && widths.get(i) > 0) {
                 marks.add(new Mark(MarkKind.BEND, new Line(net.get(i), net.get((i + 1) % m))));
             }
         }
@@ -192,7 +188,7 @@ public final class RectTransitionDeveloper {
         for (Point2 p : net) {
             label = label.plus(p.times(1.0 / m));
         }
-        return new Pattern(spec.id(), name, 1, AllowanceOutline.contour(cut, tol), List.of(), marks, label);
+        return new Pattern(spec.id(), name, 1, cut, List.of(), marks, label);
     }
 
     private static List<LayoutValue> faceValues(String prefix, Face f, List<Point2> flat) {

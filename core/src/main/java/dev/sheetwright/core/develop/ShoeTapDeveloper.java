@@ -3,8 +3,8 @@ package dev.sheetwright.core.develop;
 import dev.sheetwright.core.fitting.AllowanceTable;
 import dev.sheetwright.core.fitting.Allowances;
 import dev.sheetwright.core.fitting.EndKind;
-import dev.sheetwright.core.fitting.FittingException;
 import dev.sheetwright.core.fitting.ShoeTapSpec;
+import dev.sheetwright.core.geom.Contour;
 import dev.sheetwright.core.geom.Line;
 import dev.sheetwright.core.geom.Mark;
 import dev.sheetwright.core.geom.MarkKind;
@@ -55,16 +55,7 @@ public final class ShoeTapDeveloper {
             widths.add(flange);
             notch.add(false); // the knee is an inside corner
         }
-        double[] wd = widths.stream().mapToDouble(Double::doubleValue).toArray();
-        boolean[] nt = new boolean[notch.size()];
-        for (int i = 0; i < nt.length; i++) {
-            nt[i] = notch.get(i);
-        }
-        List<Point2> cut = AllowanceOutline.offset(net, wd, nt);
-        if (!AllowanceOutline.isSimple(cut)) {
-            throw new FittingException(spec.id(), "allowances", "the allowances overlap on the cheek; make them"
-                    + " narrower");
-        }
+        Contour outline = AllowanceOutline.cut(spec.id(), "cheek", net, widths, notch, null, ctx.tolerance());
         List<Mark> marks = new ArrayList<>();
         RectPanel.endMarks(a.endA(), List.of(new Point2(-e, 0), new Point2(w, 0)), marks, ctx.tolerance());
         Point2 heelTop = new Point2(w, h);
@@ -77,8 +68,7 @@ public final class ShoeTapDeveloper {
                 marks.add(new Mark(MarkKind.BEND, new Line(new Point2(0, e), new Point2(-e, 0))));
             }
         }
-        Pattern cheek = new Pattern(spec.id(), "cheek", 2, AllowanceOutline.contour(cut, ctx.tolerance()),
-                List.of(), marks, new Point2(w / 2, h / 2));
+        Pattern cheek = new Pattern(spec.id(), "cheek", 2, outline, List.of(), marks, new Point2(w / 2, h / 2));
         double slant = e * Math.sqrt(2);
         double frontLen = (h - e) + slant;
         List<double[]> wrapperTabs = tabs ? tabList(table.tabs(spec.depth())) : List.of();
