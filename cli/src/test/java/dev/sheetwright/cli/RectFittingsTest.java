@@ -48,8 +48,15 @@ class RectFittingsTest {
                 "E2 cheek x2", "E2 heel x1", "E2 throat x1", "O1 cheek x2", "O1 wrapper x2", "T1 bottom x1",
                 "T1 right x1", "T1 top x1", "T1 left x1", "T2 l-half-1 x1", "T2 l-half-2 x1", "S1 cheek x2",
                 "S1 back x1", "S1 front x1", "K1 cap x1"), seen);
-        JsonNode e1 = find(patterns, "E1", "cheek").get("layout");
-        assertTrue(e1.toString().contains("throatRadius") && e1.toString().contains("heelRadius"), e1::toString);
+        JsonNode e1 = find(patterns, "E1", "cheek");
+        assertEquals(30, e1.get("layout").get("heelRadius").asDouble(), 1e-9);
+        assertEquals("30", e1.get("layoutFractions").get("heelRadius").asText());
+        // R6 (§13.6): the left face of T1 stands 16.5529 in true height, 16 9/16 to the nearest sixteenth
+        assertEquals("16 9/16", find(patterns, "T1", "left").get("layoutFractions").get("trueHeight").asText());
+        // R4 (§13.5): offset radius 25.5, each arc 28.0725 degrees
+        JsonNode o1 = find(patterns, "O1", "cheek").get("layout");
+        assertEquals(25.5, o1.get("radius").asDouble(), 1e-9);
+        assertEquals(28.0725, o1.get("arcAngle").asDouble(), 5e-5);
         // the layout sheet on the terminal: the cheek radii in fractions (Ri 6, Ro 30 for E1)
         assertTrue(run.out().contains("heel radius Ro") && run.out().contains("(30)"), run::toString);
         if (!outsideReaderAvailable()) {
