@@ -15,6 +15,7 @@ import java.util.List;
  */
 public final class RectDuctDeveloper {
 
+    /** Make-ups by their number of longitudinal seams: 1, 2, 2, 4 (L halves before U and cap: the usual choice). */
     private static final List<RectConstruction> BY_SEAMS = List.of(RectConstruction.WRAP,
             RectConstruction.L_HALVES, RectConstruction.U_AND_CAP, RectConstruction.FOUR_SIDES);
 

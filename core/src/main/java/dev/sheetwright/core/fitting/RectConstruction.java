@@ -8,28 +8,21 @@ import java.util.Locale;
  * pieces fit the job's stock.
  */
 public enum RectConstruction {
-    WRAP("wrap", 1),
-    L_HALVES("l-halves", 2),
-    U_AND_CAP("u-and-cap", 2),
-    FOUR_SIDES("four-sides", 4),
-    FACES("faces", 4),
-    AUTO("auto", 0);
+    WRAP("wrap"),
+    L_HALVES("l-halves"),
+    U_AND_CAP("u-and-cap"),
+    FOUR_SIDES("four-sides"),
+    FACES("faces"),
+    AUTO("auto");
 
     private final String word;
-    private final int seams;
 
-    RectConstruction(String word, int seams) {
+    RectConstruction(String word) {
         this.word = word;
-        this.seams = seams;
     }
 
     public String word() {
         return word;
-    }
-
-    /** Longitudinal seams of a duct made this way (0 for {@code auto}, which is not yet a make-up). */
-    public int seams() {
-        return seams;
     }
 
     /** Reads a construction word, accepting only the {@code allowed} ones. */
