@@ -23,7 +23,8 @@ import java.util.Set;
  */
 final class RectReader implements FittingReader {
 
-    private static final Set<String> DUCT = FittingReader.withCommon("width", "depth", "length", "construction");
+    private static final Set<String> DUCT = FittingReader.withCommon("width", "depth", "length", "construction",
+            "bend-deduction");
     private static final Set<String> ELBOW = FittingReader.withCommon("width", "depth", "angle", "throat-radius",
             "legs");
     private static final Set<String> OFFSET = FittingReader.withCommon("width", "depth", "offset", "length");
@@ -60,7 +61,7 @@ final class RectReader implements FittingReader {
             case "rect-duct" -> new RectDuctSpec(c.id(), c.qty(), w, dp, ff.positive("length"),
                     construction(ff, RectConstruction.L_HALVES, RectConstruction.WRAP, RectConstruction.L_HALVES,
                             RectConstruction.U_AND_CAP, RectConstruction.FOUR_SIDES, RectConstruction.AUTO),
-                    allowances(ff, d, "first", "second", EndAllowance.NONE));
+                    allowances(ff, d, "first", "second", EndAllowance.NONE), ff.notNegative("bend-deduction", 0));
             case "rect-elbow" -> new RectElbowSpec(c.id(), c.qty(), w, dp, ff.positive("angle"),
                     ff.notNegative("throat-radius", w / 2), ff.notNegative("legs", 0),
                     allowances(ff, d, "first", "second", EndAllowance.NONE));

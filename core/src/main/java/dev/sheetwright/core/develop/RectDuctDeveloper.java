@@ -71,6 +71,11 @@ public final class RectDuctDeveloper {
     private static DevelopedPiece panel(RectDuctSpec spec, String piece, int count, double[] faces, double left,
             double right, DevelopContext ctx) {
         Allowances a = spec.allowances();
+        faces = faces.clone();
+        for (int i = 0; i + 1 < faces.length; i++) { // half of each corner bend's deduction off either face
+            faces[i] -= spec.bendDeduction() / 2;
+            faces[i + 1] -= spec.bendDeduction() / 2;
+        }
         Pattern p = RectPanel.build(spec.id(), piece, count, faces, spec.length(),
                 new RectPanel.Edges(left, right, a.endA(), a.endB(), a.notch()), List.of(), ctx.tolerance());
         List<LayoutValue> values = new ArrayList<>();
@@ -78,7 +83,10 @@ public final class RectDuctDeveloper {
         for (double f : faces) {
             net += f;
         }
-        values.add(LayoutValue.length("netWidth", "net width (faces)", net));
+        values.add(LayoutValue.length("netWidth", "net width (faces, less bend deductions)", net));
+        if (spec.bendDeduction() > 0) {
+            values.add(LayoutValue.length("bendDeduction", "bend deduction per corner bend", spec.bendDeduction()));
+        }
         values.add(LayoutValue.length("length", "joint length (net)", spec.length()));
         values.add(LayoutValue.length("blankWidth", "blank width with allowances", p.bounds().width()));
         values.add(LayoutValue.length("blankLength", "blank length with allowances", p.bounds().height()));

@@ -67,6 +67,21 @@ class RectDeveloperTest {
     }
 
     @Test
+    void bendDeduction_takenOffPerCornerBend_bendLineMovesByHalf() {
+        // §0.3: a fixed amount per 90 degree bend (default 0); here 0.1 in: an L half has one bend, a wrap three
+        Allowances a = new Allowances(TABLE.parseRectSeam("pittsburgh"), EndAllowance.NONE, EndAllowance.NONE, true);
+        Development l = RectDuctDeveloper.develop(new RectDuctSpec("D", 1, 24, 12, 48, RectConstruction.L_HALVES, a,
+                0.1), CTX);
+        assertEquals(37.25 - 0.1, piece(l, "l-half").bounds().width(), EPS4);
+        assertEquals(0.25 + 24 - 0.05, layout(l, "l-half").get("bend1"), EPS4);
+        Development w = RectDuctDeveloper.develop(new RectDuctSpec("D", 1, 24, 12, 48, RectConstruction.WRAP, NET,
+                0.1), CTX);
+        assertEquals(72 - 0.3, piece(w, "wrap").bounds().width(), EPS4);
+        assertEquals("bendDeduction", assertThrows(FittingException.class, () -> new RectDuctSpec("D", 1, 24, 12, 48,
+                RectConstruction.WRAP, NET, -1)).field());
+    }
+
+    @Test
     void ductMakeUps_pieceCountsAndWidths() {
         // §13.2 (common practice): wrap 2(W + D), U = W + 2D and cap W, four sides; allowances none here
         Development wrap = RectDuctDeveloper.develop(new RectDuctSpec("D", 1, 24, 12, 48, RectConstruction.WRAP, NET),
