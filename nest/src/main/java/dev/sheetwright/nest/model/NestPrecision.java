@@ -18,6 +18,8 @@ import org.locationtech.jts.geom.Polygon;
 public record NestPrecision(double scale, double linear) {
     /** Round-off of double arithmetic on coordinates of size {@code scale}, relative (about 10^7 ulps). */
     public static final double ROUND_OFF = 1e-9;
+    /** Round-off of a parameter along an edge (0 at its start, 1 at its end): shorter intervals are empty. */
+    public static final double PARAMETER_ROUND_OFF = 1e-12;
     /** What the independent checker forgives, relative to the largest length it sees (published layouts are rounded). */
     public static final double CHECK_RELATIVE = 1e-7;
     /** Overlap the checker forgives with no gap, as a fraction of a layout's part area (rounded published layouts). */

@@ -116,11 +116,9 @@ final class CandidateGrid {
                 int b1 = cellY(c.maxY + pieces.testY(k));
                 for (int b = b0; b <= b1; b++) {
                     for (int a = a0; a <= a1; a++) {
-                        int cell = b * g + a;
-                        if (pass == 0) {
-                            counts[cell]++;
-                        } else {
-                            testCells[testStart[cell] + counts[cell]++] = k;
+                        int at = bucketSlot(b * g + a, pass, testStart);
+                        if (at >= 0) {
+                            testCells[at] = k;
                         }
                     }
                 }
@@ -161,11 +159,8 @@ final class CandidateGrid {
                     int b1 = cellY(Math.max(ay, by));
                     for (int b = b0; b <= b1; b++) {
                         for (int a = a0; a <= a1; a++) {
-                            int cell = b * g + a;
-                            if (pass == 0) {
-                                counts[cell]++;
-                            } else {
-                                int at = edgeStart[cell] + counts[cell]++;
+                            int at = bucketSlot(b * g + a, pass, edgeStart);
+                            if (at >= 0) {
                                 edgePiece[at] = k;
                                 edgeIdx[at] = i;
                             }
@@ -182,6 +177,15 @@ final class CandidateGrid {
                 Arrays.fill(counts, 0, cells, 0);
             }
         }
+    }
+
+    /** Counting pass (0): counts the cell and returns -1; filling pass: the next free slot of the cell's bucket. */
+    private int bucketSlot(int cell, int pass, int[] start) {
+        if (pass == 0) {
+            counts[cell]++;
+            return -1;
+        }
+        return start[cell] + counts[cell]++;
     }
 
     private int prefix(int[] start, int cells) {

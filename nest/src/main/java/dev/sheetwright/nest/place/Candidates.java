@@ -14,18 +14,12 @@ final class Candidates {
     static final class Spot {
         double x;
         double y;
-
-        double x() {
-            return x;
-        }
-
-        double y() {
-            return y;
-        }
     }
 
-    private static final Comparator<Spot> ALONG_X = Comparator.comparingDouble(Spot::x).thenComparingDouble(Spot::y);
-    private static final Comparator<Spot> ALONG_Y = Comparator.comparingDouble(Spot::y).thenComparingDouble(Spot::x);
+    /** By x, then y; numeric order (0.0 and -0.0 are the same position). */
+    private static final Comparator<Spot> ALONG_X = (a, b) -> a.x < b.x ? -1 : a.x > b.x ? 1 : a.y < b.y ? -1 : a.y > b.y ? 1 : 0;
+    /** By y, then x. */
+    private static final Comparator<Spot> ALONG_Y = (a, b) -> a.y < b.y ? -1 : a.y > b.y ? 1 : a.x < b.x ? -1 : a.x > b.x ? 1 : 0;
 
     private Spot[] spots = newSpots(new Spot[0], 1024);
     private int count;

@@ -78,23 +78,8 @@ final class Layouter {
     }
 
     /**
-     * As {@link #run(int[], int)} but stops when {@code deadline} (System.nanoTime) passes; returns false then, with
-     * the layout incomplete.
-     */
-    boolean run(int[] order, int from, long deadline) {
-        rollback(from);
-        for (int i = from; i < order.length; i++) {
-            if (System.nanoTime() >= deadline) {
-                return false;
-            }
-            placeOne(order[i]);
-        }
-        return true;
-    }
-
-    /**
-     * Places from {@code from} on in order until {@code deadline} (System.nanoTime) passes; returns how many copies
-     * of the order are then placed or given up (the order's length when it finished).
+     * As {@link #run(int[], int)} but stops when {@code deadline} (System.nanoTime) passes; returns how many copies
+     * of the order are then placed or given up (the order's length when it finished, else the layout is incomplete).
      */
     int runUntil(int[] order, int from, long deadline) {
         rollback(from);

@@ -86,8 +86,11 @@ public final class Nester {
      * seed, executed on however many threads are given, so that the nest does not depend on the thread count.
      */
     static final int FIXED_SEARCHES = 4;
-    /** Share of a timed run after which the constructive pass stops and the rest is placed on shelves. */
-    static final double SHELF_AT = 0.85;
+    /**
+     * Share of a timed run after which the constructive pass stops and the rest is placed on shelves: the deadline
+     * itself, since shelves are a last resort (a copy on a shelf lies beyond everything placed before it).
+     */
+    static final double SHELF_AT = 1.0;
 
     private NestResult run() {
         boolean fixed = options.iterations().isPresent();
@@ -196,7 +199,7 @@ public final class Nester {
                 }
                 if (fixed) {
                     lay.run(cand, Math.min(from, valid));
-                } else if (!lay.run(cand, Math.min(from, valid), deadline)) {
+                } else if (lay.runUntil(cand, Math.min(from, valid), deadline) < n) {
                     break;
                 }
                 valid = n;

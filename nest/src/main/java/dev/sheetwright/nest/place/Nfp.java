@@ -187,7 +187,7 @@ final class Nfp {
                             lo = Math.max(lo, -d0 / dd);
                         }
                     }
-                    if (hi - lo > NestPrecision.ROUND_OFF) {
+                    if (hi - lo > NestPrecision.PARAMETER_ROUND_OFF) {
                         if (keep.length < 2 * k + 2) {
                             keep = java.util.Arrays.copyOf(keep, keep.length * 2);
                         }
