@@ -177,13 +177,9 @@ public final class SearchShape {
         return largest(p.convexHull());
     }
 
+    /** The outer ring of the largest polygon of g, or null. */
     private static Polygon largest(Geometry g) {
-        Polygon best = null;
-        for (int i = 0; i < g.getNumGeometries(); i++) {
-            if (g.getGeometryN(i) instanceof Polygon q && (best == null || q.getArea() > best.getArea())) {
-                best = q;
-            }
-        }
+        Polygon best = largestKeepingHoles(g);
         return best == null ? null : GF.createPolygon(best.getExteriorRing().getCoordinates());
     }
 

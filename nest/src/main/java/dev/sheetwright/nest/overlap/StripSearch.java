@@ -48,6 +48,7 @@ public final class StripSearch {
 
     private final NestRequest request;
     private final NestResult start;
+    private final Map<String, NestPiece> byLabel = new HashMap<>();
     private final Coil coil;
     private final List<Placement> startParts;
     private final SearchShape[] shapes;
@@ -77,7 +78,6 @@ public final class StripSearch {
         this.y0 = margin - gap / 2;
         this.y1 = coil.width() - margin + gap / 2;
         this.angles = AngleSet.of(request.rules().rotation());
-        Map<String, NestPiece> byLabel = new HashMap<>();
         for (NestPiece p : request.pieces()) {
             byLabel.put(p.label(), p);
         }
@@ -106,6 +106,15 @@ public final class StripSearch {
     private static double precisionOf(NestRequest request, NestResult start) {
         NestPrecision p = NestPrecision.ofScale(NestPrecision.scaleOf(request.pieces(), request.stock()));
         return p.checkTolerance(start.sheets().get(0).usedLength());
+    }
+
+    /** The search over a feasible one-coil nest, for tests of its conversions. */
+    static StripSearch over(NestRequest request, NestResult start) {
+        return new StripSearch(request, start);
+    }
+
+    int pieceCount() {
+        return shapes.length;
     }
 
     /**
@@ -169,10 +178,6 @@ public final class StripSearch {
     /** The poses as a nest: the used length is measured on the true outlines moved by their placements. */
     NestResult toResult(double[][] poses) {
         List<Placement> parts = new ArrayList<>();
-        Map<String, NestPiece> byLabel = new HashMap<>();
-        for (NestPiece p : request.pieces()) {
-            byLabel.put(p.label(), p);
-        }
         double maxX = Double.NEGATIVE_INFINITY;
         double area = 0;
         for (int i = 0; i < poses.length; i++) {

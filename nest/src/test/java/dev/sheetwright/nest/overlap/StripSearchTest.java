@@ -48,6 +48,27 @@ class StripSearchTest {
     }
 
     @Test
+    void posesAtAnyAngleBecomePlacementsTheCheckerAccepts() {
+        StripInstance inst = mixed(null);
+        var request = inst.toRequest();
+        var start = dev.sheetwright.nest.place.Nester.nest(request, NestOptions.constructiveOnly());
+        StripSearch search = StripSearch.over(request, start);
+        int n = search.pieceCount();
+        double[][] poses = new double[n][];
+        for (int i = 0; i < n; i++) {
+            // one piece every 10 units along the strip, mid-height, each turned by an odd angle
+            poses[i] = new double[] {0, 6 + 10 * i, 5, 17.5 * i + 3.25};
+        }
+        var result = search.toResult(poses);
+        assertTrue(NestChecker.check(request, result).isEmpty(), "checker: " + NestChecker.check(request, result));
+        List<Placement> parts = result.sheets().get(0).parts();
+        for (int i = 0; i < n; i++) {
+            double expected = dev.sheetwright.nest.model.RotationRule.normalize(17.5 * i + 3.25);
+            assertEquals(expected, parts.get(i).rotationDeg(), 1e-12, "the placement carries the real angle");
+        }
+    }
+
+    @Test
     void resultsPlaceEveryCopyOnce() {
         StripInstance inst = mixed(List.of(0.0, 180.0));
         StripPacker.StripResult r = StripPacker.packWithOverlapSearch(inst, NestOptions.steps(400, 3, 2));
