@@ -27,10 +27,6 @@ final class OverlapMeasure {
         this.slack = slack;
     }
 
-    double floor() {
-        return floor;
-    }
-
     /** Overlap of a and b: 0 when they do not collide. */
     double overlap(PlacedShape a, PlacedShape b) {
         if (a.maxX <= b.minX || b.maxX <= a.minX || a.maxY <= b.minY || b.maxY <= a.minY) {

@@ -33,8 +33,8 @@ final class PlacedShape {
             px = new double[m];
             py = new double[m];
         }
-        double c = Pose.trig(angleDeg, true);
-        double sn = Pose.trig(angleDeg, false);
+        double c = Turn.cos(angleDeg);
+        double sn = Turn.sin(angleDeg);
         double x0 = Double.POSITIVE_INFINITY;
         double y0 = Double.POSITIVE_INFINITY;
         double x1 = Double.NEGATIVE_INFINITY;
@@ -57,10 +57,6 @@ final class PlacedShape {
             px[i] = c * s.poleX[i] - sn * s.poleY[i] + x;
             py[i] = sn * s.poleX[i] + c * s.poleY[i] + y;
         }
-    }
-
-    void copyFrom(PlacedShape o) {
-        set(o.shape, o.x, o.y, o.angle);
     }
 
     int n() {

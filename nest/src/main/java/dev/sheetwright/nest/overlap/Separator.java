@@ -3,8 +3,8 @@ package dev.sheetwright.nest.overlap;
 import java.util.SplittableRandom;
 
 /**
- * Removes the overlap of a layout by guided local search. Pieces live in rectangular bins (a strip cut to length, or
- * sheets); pieces in one bin must not collide and must stay inside it. One overlapping piece at a time moves to the
+ * Removes the overlap of a layout by guided local search. Pieces live in rectangular bins (a strip cut to length; a
+ * piece may move to any open bin, for sheets, though only the strip search uses one bin so far); pieces in one bin must not collide and must stay inside it. One overlapping piece at a time moves to the
  * position, bin and rotation that minimise its weighted overlap (samples over every bin and around the current
  * position, the best refined by coordinate descent); the weight of a pair that keeps overlapping grows, and decays
  * when they are apart. A run ends when the overlap is zero, or after {@link #STRIKES} rounds without progress.
@@ -32,7 +32,6 @@ final class Separator {
     double[][] boxes;
     /** Bins a piece may move to (a strip has one). */
     boolean[] open;
-    final boolean[] fixed;
     private final double[][] pair;
     private final double[][] weight;
     private final double[] out;
@@ -54,7 +53,6 @@ final class Separator {
             at[i] = new PlacedShape();
         }
         this.bin = new int[n];
-        this.fixed = new boolean[n];
         this.boxes = boxes;
         this.open = new boolean[boxes.length];
         java.util.Arrays.fill(open, true);
@@ -380,7 +378,7 @@ final class Separator {
                 }
                 int m = 0;
                 for (int i = 0; i < n; i++) {
-                    if (!fixed[i] && overlapOf(i) > 0) {
+                    if (overlapOf(i) > 0) {
                         order[m++] = i;
                     }
                 }

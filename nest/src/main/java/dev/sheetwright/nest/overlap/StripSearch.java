@@ -184,8 +184,8 @@ public final class StripSearch {
             Placement old = startParts.get(i);
             SearchShape s = shapes[i];
             double a = poses[i][3];
-            double c = Pose.trig(a, true);
-            double sn = Pose.trig(a, false);
+            double c = Turn.cos(a);
+            double sn = Turn.sin(a);
             double tx = poses[i][1] - (c * s.refX - sn * s.refY);
             double ty = poses[i][2] - (sn * s.refX + c * s.refY);
             double angle = dev.sheetwright.nest.model.RotationRule.normalize(a);
@@ -238,8 +238,8 @@ public final class StripSearch {
             for (int i = 0; i < sep.n; i++) {
                 Placement p = startParts.get(i);
                 SearchShape s = shapes[i];
-                double c = Pose.trig(p.rotationDeg(), true);
-                double sn = Pose.trig(p.rotationDeg(), false);
+                double c = Turn.cos(p.rotationDeg());
+                double sn = Turn.sin(p.rotationDeg());
                 sep.place(i, 0, p.x() + c * s.refX - sn * s.refY, p.y() + sn * s.refX + c * s.refY, p.rotationDeg());
             }
             double length = usedLength();
