@@ -33,6 +33,9 @@ public final class GcodeProgram {
         }
     }
 
+    /** Longest comment text on one line (controllers differ in how long a block may be). */
+    static final int COMMENT_WIDTH = 72;
+
     private final Settings s;
     private final List<String> out = new ArrayList<>();
     private int number;
@@ -59,8 +62,7 @@ public final class GcodeProgram {
         comment("sheet " + head.sheet() + " of " + head.sheets() + ": " + head.stock());
         comment("material: " + head.material() + "; process: " + head.process());
         comment(String.format(Locale.ROOT, "units: %s; kerf %s %s; compensation: %s; feed %s %s/min; pierce dwell"
-                + " %s s", u, num(s.kerf()), u, s.compensation().word(), num(s.feedPerMinute()), u,
-                num(s.pierceSeconds())));
+                + " %s s", u, num(s.kerf()), u, s.compensation().word(), feed(), u, seconds(pierceSeconds())));
         comment(CutPlanner.summary(plan, u));
         if (s.compensation() == KerfCompensation.CONTROLLER) {
             comment("set the controller's kerf to " + num(s.kerf()) + " " + u + " (G41 offsets half of it)");
@@ -73,7 +75,7 @@ public final class GcodeProgram {
         block("G90");
         block("G40");
         s.machine().heights().ifPresent(h -> block("G0 Z" + num(s.unit().fromMm(h.safeMm()))));
-        double pierce = s.machine().pierceDelaySeconds().orElse(s.pierceSeconds());
+        double pierce = pierceSeconds();
         for (int i = 0; i < plan.steps().size(); i++) {
             CutStep step = plan.steps().get(i);
             comment((i + 1) + ": " + labels.get(step.part()) + (step.hole() >= 0 ? " hole " + (step.hole() + 1)
@@ -82,10 +84,9 @@ public final class GcodeProgram {
             block("G0 X" + num(p.x()) + " Y" + num(p.y()));
             s.machine().heights().ifPresent(h -> block("G0 Z" + num(s.unit().fromMm(h.pierceMm()))));
             block(s.machine().torchOn());
-            block("G4 P" + num(pierce));
-            s.machine().heights().ifPresent(h -> block("G1 Z" + num(s.unit().fromMm(h.cutMm())) + " F"
-                    + num(s.feedPerMinute())));
-            String feed = " F" + num(s.feedPerMinute());
+            block("G4 P" + seconds(pierce));
+            s.machine().heights().ifPresent(h -> block("G1 Z" + num(s.unit().fromMm(h.cutMm())) + " F" + feed()));
+            String feed = " F" + feed();
             if (s.compensation() == KerfCompensation.CONTROLLER) {
                 block("G41");
             }
@@ -128,13 +129,37 @@ public final class GcodeProgram {
         }
     }
 
-    /** A comment line; parentheses inside become brackets and anything outside printable ASCII a '?'. */
+    /**
+     * Comment lines of at most {@value #COMMENT_WIDTH} characters inside the parentheses, broken at spaces;
+     * parentheses inside become brackets and anything outside printable ASCII a '?'.
+     */
     private void comment(String text) {
-        StringBuilder b = new StringBuilder("(");
+        StringBuilder clean = new StringBuilder();
         for (char c : text.toCharArray()) {
-            b.append(c == '(' ? '[' : c == ')' ? ']' : c >= 0x20 && c < 0x7f ? c : '?');
+            clean.append(c == '(' ? '[' : c == ')' ? ']' : c >= 0x20 && c < 0x7f ? c : '?');
         }
-        out.add(b.append(')').toString());
+        String rest = clean.toString().strip();
+        while (rest.length() > COMMENT_WIDTH) {
+            int cut = rest.lastIndexOf(' ', COMMENT_WIDTH);
+            if (cut <= 0) {
+                cut = COMMENT_WIDTH;
+            }
+            out.add("(" + rest.substring(0, cut).strip() + ")");
+            rest = rest.substring(cut).strip();
+        }
+        out.add("(" + rest + ")");
+    }
+
+    private double pierceSeconds() {
+        return s.machine().pierceDelaySeconds().orElse(s.pierceSeconds());
+    }
+
+    private String feed() {
+        return String.format(Locale.ROOT, "%.1f", s.feedPerMinute());
+    }
+
+    private static String seconds(double v) {
+        return String.format(Locale.ROOT, "%.2f", v);
     }
 
     private String num(double v) {
