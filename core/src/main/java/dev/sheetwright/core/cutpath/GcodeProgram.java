@@ -35,6 +35,8 @@ public final class GcodeProgram {
 
     /** Longest comment text on one line (controllers differ in how long a block may be). */
     static final int COMMENT_WIDTH = 72;
+    /** Arcs shorter than this many output steps (chord) are written as lines. */
+    static final int ARC_AS_LINE_STEPS = 10;
 
     private final Settings s;
     private final List<String> out = new ArrayList<>();
@@ -111,7 +113,9 @@ public final class GcodeProgram {
 
     private void move(Edge e, String feed) {
         Point2 to = e.end();
-        if (e instanceof Arc a) {
+        // an arc whose ends are a few output steps apart is written as a line: a controller could read equal
+        // rounded ends as a full circle (the sagitta left out is far below the output resolution)
+        if (e instanceof Arc a && a.start().distance(to) > ARC_AS_LINE_STEPS * resolution()) {
             Point2 ij = a.centre().minus(a.start());
             block((a.sweep() < 0 ? "G2" : "G3") + " X" + num(to.x()) + " Y" + num(to.y()) + " I" + num(ij.x()) + " J"
                     + num(ij.y()) + feed);
@@ -160,6 +164,11 @@ public final class GcodeProgram {
 
     private static String seconds(double v) {
         return String.format(Locale.ROOT, "%.2f", v);
+    }
+
+    /** The smallest step the program's numbers show: 0.0001 in or 0.001 mm. */
+    private double resolution() {
+        return s.unit() == LengthUnit.INCH ? 1e-4 : 1e-3;
     }
 
     private String num(double v) {

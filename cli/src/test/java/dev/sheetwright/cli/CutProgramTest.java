@@ -1,0 +1,359 @@
+package dev.sheetwright.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * {@code nest --gcode} on the demo job, read back by outside programs: gcode-toolpath (under node) turns each
+ * program into moves, which are compared with the sheet DXF's CUT contours (read by this test's own reader); GDAL's
+ * ogrinfo and LibreCAD read the DXFs.
+ */
+class CutProgramTest {
+
+    private static final double KERF = 0.06; // fixtures/demo-bakery.yaml, cutting.kerf
+    private static final double MM_PER_IN = 25.4;
+    /** G-code is written to 0.0001 in; DXF bulge arcs are flattened here to within 0.0001 in. */
+    private static final double EPS = 0.0015;
+
+    @TempDir
+    static Path tmp;
+    static Path out;
+    static CommandRun run;
+
+    @BeforeAll
+    static void nestTheDemo() {
+        out = tmp.resolve("out");
+        run = CommandRun.of("nest", Fixtures.path("demo-bakery.yaml").toString(), "-o", out.toString(), "--gcode",
+                "--show-path", "--iterations", "5", "--seed", "3");
+    }
+
+    private static List<Path> sheets(String ext) throws Exception {
+        List<Path> files = new ArrayList<>();
+        JsonNode doc = new ObjectMapper().readTree(out.resolve("nest.json").toFile());
+        for (JsonNode s : doc.get("sheets")) {
+            files.add(out.resolve(s.get("file").asText().replace(".dxf", ext)));
+        }
+        return files;
+    }
+
+    @Test
+    void nest_gcode_writesOneProgramPerSheetWithOurHeadAndCautions() throws Exception {
+        assertEquals(0, run.exitCode(), run::toString);
+        for (Path nc : sheets(".nc")) {
+            List<String> lines = Files.readAllLines(nc);
+            assertEquals("(sheetwright cut program)", lines.get(0));
+            assertTrue(lines.contains("(job: Larkspur Bakery supply run)"), nc::toString);
+            assertTrue(lines.stream().anyMatch(l -> l.startsWith("(CAUTION: Cutting galvanized steel")));
+            assertTrue(lines.contains("G20") && lines.contains("G90"));
+            int contours = cutContours(nc.resolveSibling(nc.getFileName().toString().replace(".nc", ".dxf"))).size();
+            assertEquals(contours, lines.stream().filter("M03"::equals).count(), "one pierce per contour");
+        }
+    }
+
+    @Test
+    void gcodeToolpath_readsEveryProgram_andItsPathMeetsTheCutRules() throws Exception {
+        Path root = OutsideProgram.repoRoot();
+        Path script = root.resolve("tools/gcode-reader/read.js");
+        OutsideProgram.require("node", "apt-get install nodejs", Path.of("/usr/bin/node"));
+        OutsideProgram.require("gcode-toolpath", "npm install --prefix tools/gcode-reader",
+                root.resolve("tools/gcode-reader/node_modules/gcode-toolpath/package.json"));
+        assertEquals(0, run.exitCode(), run::toString);
+        double cutLength = 0;
+        double rapidLength = 0;
+        for (Path nc : sheets(".nc")) {
+            OutsideProgram.Run r = OutsideProgram.run(List.of("/usr/bin/node", script.toString(), nc.toString()),
+                    Map.of());
+            assertEquals(0, r.exitCode(), r::toString);
+            JsonNode doc = new ObjectMapper().readTree(r.stdout());
+            assertEquals("G20", doc.get("units").asText());
+            List<double[]> contours = cutContours(nc.resolveSibling(nc.getFileName().toString()
+                    .replace(".nc", ".dxf")));
+            checkPath(nc.getFileName().toString(), doc.get("moves"), contours);
+            for (JsonNode m : doc.get("moves")) {
+                if (m.get("motion").asText().equals("G0")) {
+                    rapidLength += length(m);
+                } else {
+                    cutLength += length(m);
+                }
+            }
+        }
+        // one source: the quote's cut and rapid lengths are those of the programs, as the outside reader sees them
+        JsonNode totals = new ObjectMapper().readTree(out.resolve("quote.json").toFile()).get("totals");
+        assertEquals(totals.get("cutLength").asDouble(), cutLength, 0.01);
+        assertEquals(totals.get("rapidLength").asDouble(), rapidLength, 0.01);
+    }
+
+    /** True length of a move in inches: a line, or an arc (radius x sweep the way G2/G3 turns). */
+    private static double length(JsonNode m) {
+        double[] a = point(m.get("from"));
+        double[] b = point(m.get("to"));
+        if (!m.has("centre")) {
+            return Math.hypot(b[0] - a[0], b[1] - a[1]);
+        }
+        double[] c = point(m.get("centre"));
+        double r = Math.hypot(a[0] - c[0], a[1] - c[1]);
+        return r * Math.abs(sweep(m, a, b, c));
+    }
+
+    private static double sweep(JsonNode m, double[] a, double[] b, double[] c) {
+        double sweep = Math.atan2(b[1] - c[1], b[0] - c[0]) - Math.atan2(a[1] - c[1], a[0] - c[0]);
+        boolean ccw = m.get("motion").asText().equals("G3");
+        while (ccw && sweep <= 0) {
+            sweep += 2 * Math.PI;
+        }
+        while (!ccw && sweep >= 0) {
+            sweep -= 2 * Math.PI;
+        }
+        return sweep;
+    }
+
+    /** The rules of the issue, checked on the outside reader's moves against the drawn contours. */
+    private static void checkPath(String name, JsonNode moves, List<double[]> contours) {
+        List<List<JsonNode>> cuts = new ArrayList<>();
+        List<JsonNode> current = null;
+        for (JsonNode m : moves) {
+            String motion = m.get("motion").asText();
+            String torch = m.get("spindle").asText();
+            if (motion.equals("G0")) {
+                assertEquals("M5", torch, name + ": a rapid with the torch on");
+                current = null;
+                continue;
+            }
+            assertEquals("M3", torch, name + ": a cutting move with the torch off");
+            if (current == null) {
+                current = new ArrayList<>();
+                cuts.add(current);
+            }
+            current.add(m);
+        }
+        assertEquals(contours.size(), cuts.size(), name + ": one pierce per contour");
+        int[] cutOf = new int[contours.size()];
+        java.util.Arrays.fill(cutOf, -1);
+        for (int c = 0; c < cuts.size(); c++) {
+            List<JsonNode> cut = cuts.get(c);
+            double[] pierce = point(cut.get(0).get("from"));
+            assertFalse(inMetal(contours, pierce), name + " cut " + (c + 1) + ": pierce in metal");
+            assertTrue(nearest(contours, pierce)[1] >= KERF / 2 - EPS, name + " cut " + (c + 1)
+                    + ": pierce nearer than kerf/2 to a part");
+            Map<Integer, Integer> votes = new HashMap<>();
+            for (int k = 0; k < cut.size(); k++) {
+                JsonNode m = cut.get(k);
+                List<double[]> probes = probes(m);
+                boolean lead = (k == 0 || k == cut.size() - 1) && probes.stream().anyMatch(
+                        p -> nearest(contours, p)[1] > KERF / 2 + EPS);
+                if (lead) {
+                    continue; // lead-in or lead-out: in scrap, checked at the pierce
+                }
+                for (double[] p : probes) {
+                    double[] near = nearest(contours, p);
+                    assertEquals(KERF / 2, near[1], EPS, name + " cut " + (c + 1) + ": path not kerf/2 off the"
+                            + " contour at " + p[0] + ", " + p[1]);
+                    assertFalse(inMetal(contours, p), name + " cut " + (c + 1) + ": path on the metal side at "
+                            + p[0] + ", " + p[1]);
+                    votes.merge((int) near[0], 1, Integer::sum);
+                }
+            }
+            int contour = votes.entrySet().stream().max(Map.Entry.comparingByValue()).orElseThrow().getKey();
+            assertEquals(-1, cutOf[contour], name + ": contour " + contour + " cut twice");
+            cutOf[contour] = c;
+        }
+        for (int a = 0; a < contours.size(); a++) {
+            for (int b = 0; b < contours.size(); b++) {
+                if (a != b && inside(contours.get(b), contours.get(a)[0], contours.get(a)[1])
+                        && area(contours.get(a)) < area(contours.get(b))) {
+                    assertTrue(cutOf[a] < cutOf[b], name + ": contour " + a + " lies inside contour " + b
+                            + " but is cut after it");
+                }
+            }
+        }
+    }
+
+    @Test
+    void ogrinfo_readsEverySheetDxf_withTheCutAndLeadLayers() throws Exception {
+        OutsideProgram.require("GDAL ogrinfo", "apt-get install gdal-bin", Path.of("/usr/bin/ogrinfo"));
+        assertEquals(0, run.exitCode(), run::toString);
+        for (Path dxf : sheets(".dxf")) {
+            OutsideProgram.Run r = OutsideProgram.run(List.of("/usr/bin/ogrinfo", "-ro", "-al", "-q",
+                    dxf.toString()), Map.of());
+            assertEquals(0, r.exitCode(), r::toString);
+            long cut = r.stdout().lines().filter(l -> l.strip().equals("Layer (String) = CUT")).count();
+            long lead = r.stdout().lines().filter(l -> l.strip().equals("Layer (String) = LEAD")).count();
+            assertEquals(cutContours(dxf).size(), cut, dxf + ": every contour as one CUT feature");
+            assertTrue(lead >= cut, dxf + ": a lead-in for every contour (" + lead + " leads, " + cut
+                    + " contours)");
+        }
+    }
+
+    @Test
+    void librecad_printsEverySheetDxfToPdf() throws Exception {
+        OutsideProgram.require("LibreCAD", "apt-get install librecad", Path.of("/usr/bin/librecad"));
+        assertEquals(0, run.exitCode(), run::toString);
+        Path pdfs = Files.createDirectories(tmp.resolve("pdf"));
+        for (Path dxf : sheets(".dxf")) {
+            OutsideProgram.Run r = OutsideProgram.run(List.of("/usr/bin/librecad", "dxf2pdf", "-a", "-t",
+                    pdfs.toString(), dxf.toString()), Map.of("QT_QPA_PLATFORM", "offscreen"));
+            assertEquals(0, r.exitCode(), r::toString);
+            Path pdf = pdfs.resolve(dxf.getFileName().toString().replace(".dxf", ".pdf"));
+            assertTrue(Files.isRegularFile(pdf), r::toString);
+            byte[] head = Files.readAllBytes(pdf);
+            assertEquals("%PDF", new String(head, 0, 4, java.nio.charset.StandardCharsets.US_ASCII));
+            assertTrue(head.length > 2000, "a drawing, not an empty page: " + head.length + " bytes");
+        }
+    }
+
+    @Test
+    void sheetDxf_cutContoursInTheProgramOrder_leadsOnTheirOwnLayer() throws Exception {
+        assertEquals(0, run.exitCode(), run::toString);
+        for (Path dxf : sheets(".dxf")) {
+            SheetDxf d = SheetDxf.read(dxf);
+            List<double[]> contours = cutContours(dxf);
+            // a contour that lies inside another comes before it in the file, as in the program
+            for (int a = 0; a < contours.size(); a++) {
+                for (int b = 0; b < a; b++) {
+                    boolean aInB = inside(contours.get(b), contours.get(a)[0], contours.get(a)[1])
+                            && area(contours.get(a)) < area(contours.get(b));
+                    assertFalse(aInB, dxf + ": contour " + a + " lies inside the earlier contour " + b);
+                }
+            }
+            assertTrue(d.polylines().stream().noneMatch(p -> p.layer().equals("LEAD")), "leads are lines");
+            String svg = Files.readString(dxf.resolveSibling(dxf.getFileName().toString().replace(".dxf", ".svg")));
+            assertTrue(svg.contains("data-layer=\"RAPID\"") && svg.contains("data-layer=\"ORDER\""),
+                    "--show-path draws the rapids and the order");
+        }
+    }
+
+    // ----- geometry of the test's own: DXF bulge polylines to fine polygons, distances, even-odd inclusion
+
+    /** Each CUT polyline of the file as a polygon {x0, y0, x1, y1, ...}, arcs flattened to within 0.0001 in. */
+    static List<double[]> cutContours(Path dxf) {
+        List<double[]> out = new ArrayList<>();
+        for (SheetDxf.Outline o : SheetDxf.read(dxf).polylines()) {
+            if (!o.layer().equals("CUT")) {
+                continue;
+            }
+            List<Double> xy = new ArrayList<>();
+            int n = o.vertices().size();
+            for (int i = 0; i < n; i++) {
+                double[] p = o.vertices().get(i);
+                double[] q = o.vertices().get((i + 1) % n);
+                double bulge = o.bulges().get(i);
+                xy.add(p[0]);
+                xy.add(p[1]);
+                if (bulge != 0) {
+                    double sweep = 4 * Math.atan(bulge);
+                    double chord = Math.hypot(q[0] - p[0], q[1] - p[1]);
+                    double r = chord / (2 * Math.sin(Math.abs(sweep) / 2));
+                    double mx = (p[0] + q[0]) / 2;
+                    double my = (p[1] + q[1]) / 2;
+                    double h = r * Math.cos(sweep / 2);
+                    double ux = -(q[1] - p[1]) / chord;
+                    double uy = (q[0] - p[0]) / chord;
+                    double cx = mx + Math.signum(bulge) * h * ux;
+                    double cy = my + Math.signum(bulge) * h * uy;
+                    double a0 = Math.atan2(p[1] - cy, p[0] - cx);
+                    int steps = (int) Math.ceil(Math.abs(sweep) / (2 * Math.acos(1 - 1e-4 / r)));
+                    for (int k = 1; k < steps; k++) {
+                        double a = a0 + sweep * k / steps;
+                        xy.add(cx + r * Math.cos(a));
+                        xy.add(cy + r * Math.sin(a));
+                    }
+                }
+            }
+            out.add(xy.stream().mapToDouble(Double::doubleValue).toArray());
+        }
+        return out;
+    }
+
+    /** The points of a move to check, in inches: start, end, and the middle (of the arc, for arcs). */
+    private static List<double[]> probes(JsonNode m) {
+        double[] a = point(m.get("from"));
+        double[] b = point(m.get("to"));
+        double[] mid = {(a[0] + b[0]) / 2, (a[1] + b[1]) / 2};
+        if (m.has("centre")) {
+            double[] c = point(m.get("centre"));
+            double r = Math.hypot(a[0] - c[0], a[1] - c[1]);
+            double a0 = Math.atan2(a[1] - c[1], a[0] - c[0]);
+            double sweep = sweep(m, a, b, c);
+            mid = new double[] {c[0] + r * Math.cos(a0 + sweep / 2), c[1] + r * Math.sin(a0 + sweep / 2)};
+        }
+        return List.of(a, mid, b);
+    }
+
+    private static double[] point(JsonNode v) {
+        return new double[] {v.get(0).asDouble() / MM_PER_IN, v.get(1).asDouble() / MM_PER_IN};
+    }
+
+    /** {index of the nearest contour, distance to it}. */
+    private static double[] nearest(List<double[]> contours, double[] p) {
+        double best = Double.POSITIVE_INFINITY;
+        int which = -1;
+        for (int c = 0; c < contours.size(); c++) {
+            double[] xy = contours.get(c);
+            int n = xy.length / 2;
+            for (int i = 0; i < n; i++) {
+                int j = (i + 1) % n;
+                double d = segment(p, xy[2 * i], xy[2 * i + 1], xy[2 * j], xy[2 * j + 1]);
+                if (d < best) {
+                    best = d;
+                    which = c;
+                }
+            }
+        }
+        return new double[] {which, best};
+    }
+
+    private static double segment(double[] p, double ax, double ay, double bx, double by) {
+        double dx = bx - ax;
+        double dy = by - ay;
+        double len2 = dx * dx + dy * dy;
+        double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((p[0] - ax) * dx + (p[1] - ay) * dy) / len2));
+        return Math.hypot(p[0] - (ax + t * dx), p[1] - (ay + t * dy));
+    }
+
+    /** Metal by the even-odd rule over every contour: inside an outline and not in its holes (parts in holes too). */
+    private static boolean inMetal(List<double[]> contours, double[] p) {
+        int count = 0;
+        for (double[] c : contours) {
+            count += inside(c, p[0], p[1]) ? 1 : 0;
+        }
+        return count % 2 == 1;
+    }
+
+    private static boolean inside(double[] xy, double x, double y) {
+        boolean in = false;
+        int n = xy.length / 2;
+        for (int i = 0, j = n - 1; i < n; j = i++) {
+            double xi = xy[2 * i];
+            double yi = xy[2 * i + 1];
+            double xj = xy[2 * j];
+            double yj = xy[2 * j + 1];
+            if ((yi > y) != (yj > y) && x < (xj - xi) * (y - yi) / (yj - yi) + xi) {
+                in = !in;
+            }
+        }
+        return in;
+    }
+
+    private static double area(double[] xy) {
+        double a = 0;
+        int n = xy.length / 2;
+        for (int i = 0; i < n; i++) {
+            int j = (i + 1) % n;
+            a += xy[2 * i] * xy[2 * j + 1] - xy[2 * j] * xy[2 * i + 1];
+        }
+        return Math.abs(a) / 2;
+    }
+}
