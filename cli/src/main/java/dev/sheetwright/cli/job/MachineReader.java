@@ -27,7 +27,7 @@ final class MachineReader {
         MachineSettings d = MachineSettings.DEFAULT;
         String on = code(m, "torch-on", d.torchOn());
         String off = code(m, "torch-off", d.torchOff());
-        if (on.equals(off)) {
+        if (MachineSettings.sameCode(on, off)) {
             throw m.error("torch-off", "must differ from torch-on (" + on + ")");
         }
         OptionalDouble delay = OptionalDouble.empty();

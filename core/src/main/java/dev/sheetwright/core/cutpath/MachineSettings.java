@@ -47,7 +47,7 @@ public record MachineSettings(String torchOn, String torchOff, OptionalDouble pi
     public MachineSettings {
         requireMCode("torch-on", torchOn);
         requireMCode("torch-off", torchOff);
-        if (torchOn.equals(torchOff)) {
+        if (sameCode(torchOn, torchOff)) {
             throw new IllegalArgumentException("torch-on and torch-off must differ, both are " + torchOn);
         }
         if (pierceDelaySeconds == null || heights == null) {
@@ -66,6 +66,11 @@ public record MachineSettings(String torchOn, String torchOff, OptionalDouble pi
         for (String line : footer) {
             requirePlain("footer", line);
         }
+    }
+
+    /** True when two M-codes are the same code however written ({@code M7} and {@code M07}). */
+    public static boolean sameCode(String a, String b) {
+        return Integer.parseInt(a.substring(1)) == Integer.parseInt(b.substring(1));
     }
 
     /** True for an M-code word such as {@code M03} or {@code M7}. */
