@@ -112,7 +112,8 @@ public final class NestCommand implements Callable<Integer> {
     boolean gcode;
 
     @Option(names = "--show-path",
-            description = "draw the cut order (numbers at the pierces) and the rapids (dashed) on the SVG previews")
+            description = "draw the cut order (numbers at the pierces) and the rapids (dashed) on the SVG previews"
+                    + " and the report's sheet pictures")
     boolean showPath;
 
     @Override
@@ -184,7 +185,7 @@ public final class NestCommand implements Callable<Integer> {
             }
             JsonFiles.write(doc, folder.file("nest.json"));
             JsonFiles.write(PatternsJson.document(job, nest.developments()), folder.file("patterns.json"));
-            Quote quote = QuoteFiles.write(folder, nest, cuts, file.quote(), shop.settings());
+            Quote quote = QuoteFiles.write(folder, nest, cuts, file.quote(), shop.settings(), showPath);
             folder.commit();
             return quote;
         }

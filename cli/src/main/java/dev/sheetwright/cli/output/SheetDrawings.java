@@ -54,7 +54,7 @@ public final class SheetDrawings {
         SHEET_LAYERS = List.copyOf(layers);
     }
 
-    private static final List<Layer> PREVIEW_LAYERS = List.of(Layer.of(RAPID, 6), Layer.of(ORDER, 6));
+    static final List<Layer> PREVIEW_LAYERS = List.of(Layer.of(RAPID, 6), Layer.of(ORDER, 6));
 
     private SheetDrawings() {
     }
@@ -118,14 +118,16 @@ public final class SheetDrawings {
         List<Layer> layers = new ArrayList<>(SHEET_LAYERS);
         if (showPath) {
             layers.addAll(PREVIEW_LAYERS);
-            addPath(shapes, cut, unit);
+            dev.sheetwright.dxf.Bounds b = stockOutline(sheet).bounds();
+            addPath(shapes, cut, unit, Math.max(b.width(), b.height()));
         }
         return Drawing.of(unit.symbol(), layers, shapes);
     }
 
     /** Order numbers at each pierce and the rapids to it, for a preview. */
-    private static void addPath(List<Shape> shapes, SheetCutPlan cut, LengthUnit unit) {
-        double h = PartLabels.normalHeight(unit) * 0.8;
+    static void addPath(List<Shape> shapes, SheetCutPlan cut, LengthUnit unit, double longSide) {
+        // numbers that read on a whole-sheet preview: a 100th of the sheet's long side, at least a label's height
+        double h = Math.max(PartLabels.normalHeight(unit), longSide / 100);
         for (int i = 0; i < cut.steps().size(); i++) {
             dev.sheetwright.core.geom.Line r = cut.rapids().get(i);
             if (r.length() > 0) {

@@ -29,16 +29,19 @@ public final class QuoteFiles {
     /** Computes the quote and writes the four files into the staging folder. */
     public static Quote write(OutputFolder folder, JobNest nest, Path jobFile, ShopSettings shop) {
         JobReader.JobFile file = JobReader.readFull(jobFile);
-        return write(folder, nest, CutPlans.of(nest, file.cutPath()), file.quote(), shop);
+        return write(folder, nest, CutPlans.of(nest, file.cutPath()), file.quote(), shop, false);
     }
 
-    /** As {@link #write(OutputFolder, JobNest, Path, ShopSettings)} with the sheets' cut plans already made. */
+    /**
+     * As {@link #write(OutputFolder, JobNest, Path, ShopSettings)} with the sheets' cut plans already made;
+     * {@code showPath} draws the cutting order and rapids on the report's sheet pictures.
+     */
     public static Quote write(OutputFolder folder, JobNest nest, CutPlans plans, QuoteTerms terms,
-            ShopSettings shop) {
+            ShopSettings shop, boolean showPath) {
         Quote q = JobQuote.of(nest, plans, terms, shop);
         JsonFiles.write(QuoteJson.document(nest.job().name(), q), folder.file("quote.json"));
         QuoteCsv.write(q, folder.file("quote.csv"));
-        ShopReport report = ShopReport.of(nest, q);
+        ShopReport report = ShopReport.of(nest, q, showPath ? plans : null);
         ReportHtml.write(report, folder.file("report.html"));
         ReportPdf.write(report, folder.file("report.pdf"));
         return q;
