@@ -235,6 +235,62 @@ class CutProgramTest {
         }
     }
 
+    @Test
+    void sheetDxf_everyPartLabelLiesInsideOnePartsMetal() throws Exception {
+        assertEquals(0, run.exitCode(), run::toString);
+        double charWidth = 0.95; // capitals and digits, in text heights, rounded up
+        for (Path dxf : sheets(".dxf")) {
+            List<double[]> contours = cutContours(dxf);
+            int labels = 0;
+            for (SheetDxf.Label t : SheetDxf.read(dxf).texts()) {
+                if (!t.layer().equals("LABEL") || t.value().contains("OFFCUT") || t.value().contains(" sheet ")) {
+                    continue; // the offcut's label lies in the offcut
+                }
+                labels++;
+                double h = labelHeight(dxf, t);
+                double w = charWidth * t.value().length() * h;
+                int outer = -1;
+                for (double fx = 0; fx <= 1.0001; fx += 0.125) {
+                    for (double fy = 0; fy <= 1.0001; fy += 0.5) {
+                        double[] p = {t.x() + fx * w, t.y() + fy * h};
+                        assertTrue(inMetal(contours, p), dxf + ": label '" + t.value() + "' leaves its part at "
+                                + p[0] + ", " + p[1]);
+                        int in = smallestOuter(contours, p);
+                        assertTrue(outer == -1 || outer == in, dxf + ": label '" + t.value() + "' spans two parts");
+                        outer = in;
+                    }
+                }
+            }
+            assertTrue(labels > 0, dxf + ": no part labels");
+        }
+    }
+
+    /** The text height of a label, read from the file's group 40. */
+    private static double labelHeight(Path dxf, SheetDxf.Label t) throws Exception {
+        List<String> lines = Files.readAllLines(dxf);
+        for (int i = 0; i + 1 < lines.size(); i += 2) {
+            if (lines.get(i).strip().equals("1") && lines.get(i + 1).equals(t.value())) {
+                for (int k = i - 2; k > 0 && !lines.get(k).strip().equals("0"); k -= 2) {
+                    if (lines.get(k).strip().equals("40")) {
+                        return Double.parseDouble(lines.get(k + 1).strip());
+                    }
+                }
+            }
+        }
+        throw new AssertionError("no height for " + t.value());
+    }
+
+    /** The smallest contour holding the point (a part's outline, or a hole with a part in it). */
+    private static int smallestOuter(List<double[]> contours, double[] p) {
+        int best = -1;
+        for (int c = 0; c < contours.size(); c++) {
+            if (inside(contours.get(c), p[0], p[1]) && (best < 0 || area(contours.get(c)) < area(contours.get(best)))) {
+                best = c;
+            }
+        }
+        return best;
+    }
+
     // ----- geometry of the test's own: DXF bulge polylines to fine polygons, distances, even-odd inclusion
 
     /** Each CUT polyline of the file as a polygon {x0, y0, x1, y1, ...}, arcs flattened to within 0.0001 in. */
