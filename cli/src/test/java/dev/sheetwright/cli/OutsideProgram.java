@@ -58,6 +58,11 @@ final class OutsideProgram {
     }
 
     static Run run(List<String> command, Map<String, String> env) {
+        return run(command, env, TIMEOUT_SECONDS);
+    }
+
+    /** Runs the command with no input, waiting at most {@code timeoutSeconds}; fails the test when it overruns. */
+    static Run run(List<String> command, Map<String, String> env, long timeoutSeconds) {
         Path out = null;
         Path err = null;
         try {
@@ -66,9 +71,11 @@ final class OutsideProgram {
             ProcessBuilder pb = new ProcessBuilder(command).redirectOutput(out.toFile()).redirectError(err.toFile());
             pb.environment().putAll(env);
             Process p = pb.start();
-            if (!p.waitFor(TIMEOUT_SECONDS, TimeUnit.SECONDS)) {
+            p.getOutputStream().close();
+            if (!p.waitFor(timeoutSeconds, TimeUnit.SECONDS)) {
                 p.destroyForcibly();
-                Assertions.fail(command.get(0) + " did not finish within " + TIMEOUT_SECONDS + " s");
+                p.waitFor(10, TimeUnit.SECONDS);
+                Assertions.fail(command.get(0) + " did not finish within " + timeoutSeconds + " s: " + command);
             }
             return new Run(p.exitValue(), Files.readString(out, StandardCharsets.UTF_8),
                     Files.readString(err, StandardCharsets.UTF_8));
