@@ -17,30 +17,51 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * {@code nest --gcode} on the demo job, read back by outside programs: gcode-toolpath (under node) turns each
- * program into moves, which are compared with the sheet DXF's CUT contours (read by this test's own reader); GDAL's
- * ogrinfo and LibreCAD read the DXFs.
+ * {@code nest --gcode} on the demo job (inch, plasma) and on a metric laser job with lead-outs, read back by outside
+ * programs: gcode-toolpath (under node) turns each program into moves, which are compared with the sheet DXF's CUT
+ * contours (read by this test's own reader); GDAL's ogrinfo and LibreCAD read the DXFs.
  */
 class CutProgramTest {
 
-    private static final double KERF = 0.06; // fixtures/demo-bakery.yaml, cutting.kerf
     private static final double MM_PER_IN = 25.4;
-    /** G-code is written to 0.0001 in; DXF bulge arcs are flattened here to within 0.0001 in. */
-    private static final double EPS = 0.0015;
+
+    /** An invented metric job: a tee (its main has the joint hole), reducers and an elbow, cut by laser. */
+    private static final String METRIC_JOB = String.join("\n", "job: metric check", "units: mm",
+            "material: {type: galvanized, thickness: 0.8}",
+            "cutting: {process: laser, kerf: 0.2, gap: 3, lead-in: 1.5, lead-out: 0.5}",
+            "fittings:",
+            "  - {id: T1, type: tee, main: 300, branch: 200, angle: 90, length: 250, main-length: 600}",
+            "  - {id: R1, type: reducer, large: 300, small: 200, height: 250, qty: 2}",
+            "  - {id: E1, type: elbow, diameter: 200, angle: 90}", "");
+
+    /**
+     * One nested job: where its output is, its kerf, its unit in mm, and how closely the path must sit at kerf/2
+     * (G-code is written to 0.0001 in or 0.001 mm; DXF arcs are flattened here to within 0.0001 of the unit).
+     */
+    record Job(String name, Path out, CommandRun run, double kerf, double mmPerUnit, double eps) {
+    }
 
     @TempDir
     static Path tmp;
-    static Path out;
-    static CommandRun run;
+    static List<Job> jobs;
 
     @BeforeAll
-    static void nestTheDemo() {
-        out = tmp.resolve("out");
-        run = CommandRun.of("nest", Fixtures.path("demo-bakery.yaml").toString(), "-o", out.toString(), "--gcode",
-                "--show-path", "--iterations", "5", "--seed", "3");
+    static void nestTheJobs() throws Exception {
+        Path demoOut = tmp.resolve("demo");
+        CommandRun demo = CommandRun.of("nest", Fixtures.path("demo-bakery.yaml").toString(), "-o",
+                demoOut.toString(), "--gcode", "--show-path", "--iterations", "5", "--seed", "3");
+        Path metricJob = tmp.resolve("metric.yaml");
+        Files.writeString(metricJob, METRIC_JOB);
+        Path metricOut = tmp.resolve("metric");
+        CommandRun metric = CommandRun.of("nest", metricJob.toString(), "-o", metricOut.toString(), "--gcode",
+                "--show-path", "--iterations", "3", "--seed", "1");
+        jobs = List.of(new Job("demo", demoOut, demo, 0.06, MM_PER_IN, 0.0015),
+                new Job("metric", metricOut, metric, 0.2, 1, 0.02));
     }
 
-    private static List<Path> sheets(String ext) throws Exception {
+    private static List<Path> sheets(Job job, String ext) throws Exception {
+        Path out = job.out();
+        assertEquals(0, job.run().exitCode(), job.run()::toString);
         List<Path> files = new ArrayList<>();
         JsonNode doc = new ObjectMapper().readTree(out.resolve("nest.json").toFile());
         for (JsonNode s : doc.get("sheets")) {
@@ -49,10 +70,18 @@ class CutProgramTest {
         return files;
     }
 
+    private static List<Path> allSheets(String ext) throws Exception {
+        List<Path> all = new ArrayList<>();
+        for (Job job : jobs) {
+            all.addAll(sheets(job, ext));
+        }
+        return all;
+    }
+
     @Test
     void nest_gcode_writesOneProgramPerSheetWithOurHeadAndCautions() throws Exception {
-        assertEquals(0, run.exitCode(), run::toString);
-        for (Path nc : sheets(".nc")) {
+        Job demo = jobs.get(0);
+        for (Path nc : sheets(demo, ".nc")) {
             List<String> lines = Files.readAllLines(nc);
             assertEquals("(sheetwright cut program)", lines.get(0));
             assertTrue(lines.contains("(job: Larkspur Bakery supply run)"), nc::toString);
@@ -68,42 +97,47 @@ class CutProgramTest {
         Path root = OutsideProgram.repoRoot();
         Path script = root.resolve("tools/gcode-reader/read.js");
         OutsideProgram.require("node", "apt-get install nodejs", Path.of("/usr/bin/node"));
-        OutsideProgram.require("gcode-toolpath", "npm install --prefix tools/gcode-reader",
+        OutsideProgram.require("gcode-toolpath", "npm ci --prefix tools/gcode-reader",
                 root.resolve("tools/gcode-reader/node_modules/gcode-toolpath/package.json"));
-        assertEquals(0, run.exitCode(), run::toString);
-        double cutLength = 0;
-        double rapidLength = 0;
-        for (Path nc : sheets(".nc")) {
-            OutsideProgram.Run r = OutsideProgram.run(List.of("/usr/bin/node", script.toString(), nc.toString()),
-                    Map.of());
-            assertEquals(0, r.exitCode(), r::toString);
-            JsonNode doc = new ObjectMapper().readTree(r.stdout());
-            assertEquals("G20", doc.get("units").asText());
-            List<double[]> contours = cutContours(nc.resolveSibling(nc.getFileName().toString()
-                    .replace(".nc", ".dxf")));
-            checkPath(nc.getFileName().toString(), doc.get("moves"), contours);
-            for (JsonNode m : doc.get("moves")) {
-                if (m.get("motion").asText().equals("G0")) {
-                    rapidLength += length(m);
-                } else {
-                    cutLength += length(m);
+        for (Job job : jobs) {
+            double cutLength = 0;
+            double rapidLength = 0;
+            int leadOuts = 0;
+            for (Path nc : sheets(job, ".nc")) {
+                OutsideProgram.Run r = OutsideProgram.run(List.of("/usr/bin/node", script.toString(),
+                        nc.toString()), Map.of());
+                assertEquals(0, r.exitCode(), r::toString);
+                JsonNode doc = new ObjectMapper().readTree(r.stdout());
+                assertEquals(job.mmPerUnit() == 1 ? "G21" : "G20", doc.get("units").asText());
+                List<double[]> contours = cutContours(nc.resolveSibling(nc.getFileName().toString()
+                        .replace(".nc", ".dxf")));
+                leadOuts += checkPath(job, job.name() + " " + nc.getFileName(), doc.get("moves"), contours);
+                for (JsonNode m : doc.get("moves")) {
+                    if (m.get("motion").asText().equals("G0")) {
+                        rapidLength += length(job, m);
+                    } else {
+                        cutLength += length(job, m);
+                    }
                 }
             }
+            // one source: the quote's cut and rapid lengths are the programs', as the outside reader sees them
+            JsonNode totals = new ObjectMapper().readTree(job.out().resolve("quote.json").toFile()).get("totals");
+            assertEquals(totals.get("cutLength").asDouble(), cutLength, 100 * job.eps(), job.name());
+            assertEquals(totals.get("rapidLength").asDouble(), rapidLength, 100 * job.eps(), job.name());
+            if (job.name().equals("metric")) {
+                assertTrue(leadOuts > 0, "the metric job asks for lead-outs");
+            }
         }
-        // one source: the quote's cut and rapid lengths are those of the programs, as the outside reader sees them
-        JsonNode totals = new ObjectMapper().readTree(out.resolve("quote.json").toFile()).get("totals");
-        assertEquals(totals.get("cutLength").asDouble(), cutLength, 0.01);
-        assertEquals(totals.get("rapidLength").asDouble(), rapidLength, 0.01);
     }
 
-    /** True length of a move in inches: a line, or an arc (radius x sweep the way G2/G3 turns). */
-    private static double length(JsonNode m) {
-        double[] a = point(m.get("from"));
-        double[] b = point(m.get("to"));
+    /** True length of a move in job units: a line, or an arc (radius x sweep the way G2/G3 turns). */
+    private static double length(Job job, JsonNode m) {
+        double[] a = point(job, m.get("from"));
+        double[] b = point(job, m.get("to"));
         if (!m.has("centre")) {
             return Math.hypot(b[0] - a[0], b[1] - a[1]);
         }
-        double[] c = point(m.get("centre"));
+        double[] c = point(job, m.get("centre"));
         double r = Math.hypot(a[0] - c[0], a[1] - c[1]);
         return r * Math.abs(sweep(m, a, b, c));
     }
@@ -120,8 +154,14 @@ class CutProgramTest {
         return sweep;
     }
 
-    /** The rules of the issue, checked on the outside reader's moves against the drawn contours. */
-    private static void checkPath(String name, JsonNode moves, List<double[]> contours) {
+    /**
+     * The rules of the issue, checked on the outside reader's moves against the drawn contours; returns how many
+     * cuts ended with a lead-out.
+     */
+    private static int checkPath(Job job, String name, JsonNode moves, List<double[]> contours) {
+        double kerf = job.kerf();
+        double eps = job.eps();
+        int leadOuts = 0;
         List<List<JsonNode>> cuts = new ArrayList<>();
         List<JsonNode> current = null;
         for (JsonNode m : moves) {
@@ -144,22 +184,27 @@ class CutProgramTest {
         java.util.Arrays.fill(cutOf, -1);
         for (int c = 0; c < cuts.size(); c++) {
             List<JsonNode> cut = cuts.get(c);
-            double[] pierce = point(cut.get(0).get("from"));
+            double[] pierce = point(job, cut.get(0).get("from"));
             assertFalse(inMetal(contours, pierce), name + " cut " + (c + 1) + ": pierce in metal");
-            assertTrue(nearest(contours, pierce)[1] >= KERF / 2 - EPS, name + " cut " + (c + 1)
+            assertTrue(nearest(contours, pierce)[1] >= kerf / 2 - eps, name + " cut " + (c + 1)
                     + ": pierce nearer than kerf/2 to a part");
             Map<Integer, Integer> votes = new HashMap<>();
             for (int k = 0; k < cut.size(); k++) {
                 JsonNode m = cut.get(k);
-                List<double[]> probes = probes(m);
+                List<double[]> probes = probes(job, m);
                 boolean lead = (k == 0 || k == cut.size() - 1) && probes.stream().anyMatch(
-                        p -> nearest(contours, p)[1] > KERF / 2 + EPS);
+                        p -> nearest(contours, p)[1] > kerf / 2 + eps);
                 if (lead) {
-                    continue; // lead-in or lead-out: in scrap, checked at the pierce
+                    if (k > 0) {
+                        leadOuts++;
+                        double[] end = probes.get(2);
+                        assertFalse(inMetal(contours, end), name + " cut " + (c + 1) + ": lead-out into metal");
+                    }
+                    continue; // lead-in or lead-out: in scrap, checked at the pierce and the lead-out's end
                 }
                 for (double[] p : probes) {
                     double[] near = nearest(contours, p);
-                    assertEquals(KERF / 2, near[1], EPS, name + " cut " + (c + 1) + ": path not kerf/2 off the"
+                    assertEquals(kerf / 2, near[1], eps, name + " cut " + (c + 1) + ": path not kerf/2 off the"
                             + " contour at " + p[0] + ", " + p[1]);
                     assertFalse(inMetal(contours, p), name + " cut " + (c + 1) + ": path on the metal side at "
                             + p[0] + ", " + p[1]);
@@ -179,13 +224,13 @@ class CutProgramTest {
                 }
             }
         }
+        return leadOuts;
     }
 
     @Test
     void ogrinfo_readsEverySheetDxf_withTheCutAndLeadLayers() throws Exception {
         OutsideProgram.require("GDAL ogrinfo", "apt-get install gdal-bin", Path.of("/usr/bin/ogrinfo"));
-        assertEquals(0, run.exitCode(), run::toString);
-        for (Path dxf : sheets(".dxf")) {
+        for (Path dxf : allSheets(".dxf")) {
             OutsideProgram.Run r = OutsideProgram.run(List.of("/usr/bin/ogrinfo", "-ro", "-al", "-q",
                     dxf.toString()), Map.of());
             assertEquals(0, r.exitCode(), r::toString);
@@ -200,9 +245,8 @@ class CutProgramTest {
     @Test
     void librecad_printsEverySheetDxfToPdf() throws Exception {
         OutsideProgram.require("LibreCAD", "apt-get install librecad", Path.of("/usr/bin/librecad"));
-        assertEquals(0, run.exitCode(), run::toString);
-        Path pdfs = Files.createDirectories(tmp.resolve("pdf"));
-        for (Path dxf : sheets(".dxf")) {
+        for (Path dxf : allSheets(".dxf")) {
+            Path pdfs = Files.createDirectories(tmp.resolve("pdf-" + dxf.getParent().getParent().getFileName()));
             OutsideProgram.Run r = OutsideProgram.run(List.of("/usr/bin/librecad", "dxf2pdf", "-a", "-t",
                     pdfs.toString(), dxf.toString()), Map.of("QT_QPA_PLATFORM", "offscreen"));
             assertEquals(0, r.exitCode(), r::toString);
@@ -216,8 +260,7 @@ class CutProgramTest {
 
     @Test
     void sheetDxf_cutContoursInTheProgramOrder_leadsOnTheirOwnLayer() throws Exception {
-        assertEquals(0, run.exitCode(), run::toString);
-        for (Path dxf : sheets(".dxf")) {
+        for (Path dxf : allSheets(".dxf")) {
             SheetDxf d = SheetDxf.read(dxf);
             List<double[]> contours = cutContours(dxf);
             // a contour that lies inside another comes before it in the file, as in the program
@@ -237,9 +280,8 @@ class CutProgramTest {
 
     @Test
     void sheetDxf_everyPartLabelLiesInsideOnePartsMetal() throws Exception {
-        assertEquals(0, run.exitCode(), run::toString);
         double charWidth = 0.95; // capitals and digits, in text heights, rounded up
-        for (Path dxf : sheets(".dxf")) {
+        for (Path dxf : allSheets(".dxf")) {
             List<double[]> contours = cutContours(dxf);
             int labels = 0;
             for (SheetDxf.Label t : SheetDxf.read(dxf).texts()) {
@@ -333,13 +375,13 @@ class CutProgramTest {
         return out;
     }
 
-    /** The points of a move to check, in inches: start, end, and the middle (of the arc, for arcs). */
-    private static List<double[]> probes(JsonNode m) {
-        double[] a = point(m.get("from"));
-        double[] b = point(m.get("to"));
+    /** The points of a move to check, in job units: start, the middle (of the arc, for arcs), end. */
+    private static List<double[]> probes(Job job, JsonNode m) {
+        double[] a = point(job, m.get("from"));
+        double[] b = point(job, m.get("to"));
         double[] mid = {(a[0] + b[0]) / 2, (a[1] + b[1]) / 2};
         if (m.has("centre")) {
-            double[] c = point(m.get("centre"));
+            double[] c = point(job, m.get("centre"));
             double r = Math.hypot(a[0] - c[0], a[1] - c[1]);
             double a0 = Math.atan2(a[1] - c[1], a[0] - c[0]);
             double sweep = sweep(m, a, b, c);
@@ -348,8 +390,9 @@ class CutProgramTest {
         return List.of(a, mid, b);
     }
 
-    private static double[] point(JsonNode v) {
-        return new double[] {v.get(0).asDouble() / MM_PER_IN, v.get(1).asDouble() / MM_PER_IN};
+    /** A point of the reader (millimetres) in job units. */
+    private static double[] point(Job job, JsonNode v) {
+        return new double[] {v.get(0).asDouble() / job.mmPerUnit(), v.get(1).asDouble() / job.mmPerUnit()};
     }
 
     /** {index of the nearest contour, distance to it}. */
