@@ -1,5 +1,6 @@
 package dev.sheetwright.cli;
 
+import dev.sheetwright.inventory.RackAccessException;
 import dev.sheetwright.inventory.RemnantConflictException;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
@@ -26,10 +27,13 @@ public final class ExitCodes {
     private ExitCodes() {
     }
 
-    /** The exit code for an exception: bad input (including a remnant taken by another plan) or failure. */
+    /**
+     * The exit code for an exception: bad input (including a remnant taken by another plan, and a rack that is not
+     * there, not a rack, or whose server refuses the connection or login) or failure.
+     */
     public static int of(Throwable t) {
         if (t instanceof IllegalArgumentException || t instanceof RemnantConflictException
-                || t instanceof CommandLine.ParameterException) {
+                || t instanceof RackAccessException || t instanceof CommandLine.ParameterException) {
             return BAD_INPUT;
         }
         return FAILURE;

@@ -5,6 +5,7 @@ import dev.sheetwright.cli.command.CommitCommand;
 import dev.sheetwright.cli.command.DevelopCommand;
 import dev.sheetwright.cli.command.NestCommand;
 import dev.sheetwright.cli.command.QuoteCommand;
+import dev.sheetwright.cli.command.ReleaseCommand;
 import dev.sheetwright.cli.command.RemnantCommand;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -15,7 +16,7 @@ import picocli.CommandLine;
 @Command(name = "sheetwright", mixinStandardHelpOptions = true, versionProvider = ManifestVersion.class,
         description = "Round duct fittings from shop ticket to flat patterns, sheet cut programs and a material quote.",
         subcommands = {DevelopCommand.class, NestCommand.class, QuoteCommand.class, RemnantCommand.class, BenchCommand.class,
-            CommitCommand.class,
+            CommitCommand.class, ReleaseCommand.class,
             CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:done", "1:unexpected failure (a bug or an I/O problem)",

@@ -37,7 +37,8 @@ class RackCommandTest {
     private static final double EPS = 1e-6;
     private static final double GAP = 0.25;
     private static final GeometryFactory GEOMETRY = new GeometryFactory();
-    private static final String JOB = """
+    /** A small galvanized job nested against the rack (an invented scenario); shared by the rack tests. */
+    static final String JOB = """
             version: 1
             job: Rack test
             units: in
@@ -283,7 +284,7 @@ class RackCommandTest {
                 "0", "--use-remnants", "--inventory", missing.toString());
 
         exit(2, run);
-        assertTrue(run.err().startsWith("error: --inventory " + missing + ": no inventory there"), run.err());
+        assertTrue(run.err().startsWith("error: inventory " + missing + ": no rack there"), run.err());
         assertFalse(Files.exists(missing));
         assertFalse(Files.exists(dir.resolve("out")));
     }

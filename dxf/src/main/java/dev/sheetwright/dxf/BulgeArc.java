@@ -46,6 +46,25 @@ public final class BulgeArc {
         return new BulgeArc(cx, cy, radius, Math.atan2(y1 - cy, x1 - cx), 4 * Math.atan(bulge));
     }
 
+    /**
+     * The points strictly between the arc's ends where chords no further than {@code chordTolerance} from the arc
+     * meet it: the sagitta of a chord of angle a is r (1 - cos(a / 2)), so steps of 2 acos(1 - tol / r) keep it
+     * within the tolerance (common practice); none for an arc flatter than the tolerance.
+     */
+    public java.util.List<double[]> innerPoints(double chordTolerance) {
+        if (!(chordTolerance > 0) || !Double.isFinite(chordTolerance)) {
+            throw new IllegalArgumentException("chordTolerance must be finite and > 0, got " + chordTolerance);
+        }
+        double step = chordTolerance >= radius ? Math.PI : 2.0 * Math.acos(1.0 - chordTolerance / radius);
+        int segments = Math.max(1, (int) Math.ceil(Math.abs(sweep) / step));
+        java.util.List<double[]> out = new java.util.ArrayList<>(segments);
+        for (int k = 1; k < segments; k++) {
+            double t = startAngle + sweep * k / segments;
+            out.add(new double[] {centreX + radius * Math.cos(t), centreY + radius * Math.sin(t)});
+        }
+        return out;
+    }
+
     double length() {
         return radius * Math.abs(sweep);
     }

@@ -50,6 +50,20 @@ final class Migrations {
             )""",
             "CREATE INDEX plan_offcut_id_by_plan ON plan_offcut_id (plan_id)"));
 
+    /**
+     * What a settled plan cuts and leaves is kept with it, so a commit records what the plan held, not what an edited
+     * nest.json says: the remnants it cuts, each offcut's material, thickness, outline and source, and when the plan
+     * was released without a commit.
+     */
+    static final Migration V3 = new Migration(3, "plans keep what they cut and leave; released plans", List.of(
+            "ALTER TABLE plan ADD COLUMN remnants_used TEXT",
+            "ALTER TABLE plan ADD COLUMN released TEXT",
+            "ALTER TABLE plan_offcut_id ADD COLUMN material TEXT",
+            "ALTER TABLE plan_offcut_id ADD COLUMN gauge INTEGER",
+            "ALTER TABLE plan_offcut_id ADD COLUMN thickness_mm REAL",
+            "ALTER TABLE plan_offcut_id ADD COLUMN outline TEXT",
+            "ALTER TABLE plan_offcut_id ADD COLUMN source TEXT"));
+
     /** All migrations, in version order. */
-    static final List<Migration> ALL = List.of(V1, V2);
+    static final List<Migration> ALL = List.of(V1, V2, V3);
 }

@@ -1,6 +1,10 @@
 package dev.sheetwright.inventory;
 
+import dev.sheetwright.core.material.GaugeRow;
+import dev.sheetwright.core.material.GaugeTable;
 import dev.sheetwright.core.material.MaterialType;
+import dev.sheetwright.core.units.LengthUnit;
+import java.util.stream.Collectors;
 
 /**
  * A remnant about to be added to the store (it has no id yet).
@@ -33,6 +37,9 @@ public record NewRemnant(MaterialType material, Integer gauge, Double thicknessM
             throw new IllegalArgumentException("gauge: " + gauge + " is out of range; must be "
                     + MIN_GAUGE + " to " + MAX_GAUGE);
         }
+        if (gauge != null) {
+            checkGauge(material, gauge, thicknessMm);
+        }
         if (thicknessMm != null && (!Double.isFinite(thicknessMm) || thicknessMm <= 0.0
                 || thicknessMm > MAX_THICKNESS_MM)) {
             throw new IllegalArgumentException("thickness_mm: " + thicknessMm
@@ -49,6 +56,47 @@ public record NewRemnant(MaterialType material, Integer gauge, Double thicknessM
         if (source == null) {
             source = RemnantSource.manual();
         }
+    }
+
+    /**
+     * The gauge must be in the material's gauge table (core's {@code GaugeTable}, each row with its source, e.g.
+     * [S:SMACNA-GALV]); with a thickness too, the two must agree: within the table's minimum and maximum for that
+     * gauge when it gives them, else the thickness must be nearer that gauge's nominal thickness than any other
+     * gauge's (common practice).
+     */
+    private static void checkGauge(MaterialType material, int gauge, Double thicknessMm) {
+        GaugeTable table = GaugeTable.of(material);
+        GaugeRow row = table.find(gauge).orElseThrow(() -> new IllegalArgumentException("gauge: " + gauge
+                + " is not in the " + material.word() + " gauge table (" + table.system() + "); valid gauges: "
+                + table.gauges().stream().map(String::valueOf).collect(Collectors.joining(", "))));
+        if (thicknessMm == null || !Double.isFinite(thicknessMm)) {
+            return;
+        }
+        double mmPerIn = LengthUnit.INCH.mmPerUnit();
+        double t = thicknessMm / mmPerIn;
+        boolean agrees;
+        String range;
+        if (row.minIn().isPresent() && row.maxIn().isPresent()) {
+            double low = row.minIn().getAsDouble();
+            double high = row.maxIn().getAsDouble();
+            agrees = t >= low && t <= high;
+            range = mm3(low * mmPerIn) + " to " + mm3(high * mmPerIn) + " mm";
+        } else {
+            GaugeRow nearest = table.rows().stream()
+                    .min(java.util.Comparator.comparingDouble(r -> Math.abs(r.nominalIn() - t))).orElseThrow();
+            agrees = nearest.gauge() == gauge;
+            range = "nearest to it of all gauges";
+        }
+        if (!agrees) {
+            throw new IllegalArgumentException("gauge/thickness_mm: " + material.word() + " " + gauge + " ga is "
+                    + mm3(row.nominalIn() * mmPerIn) + " mm (" + range + ") in the " + table.system()
+                    + " table, but the thickness given is " + mm3(thicknessMm) + " mm; give the gauge or the"
+                    + " thickness that is right");
+        }
+    }
+
+    private static String mm3(double mm) {
+        return String.format(java.util.Locale.ROOT, "%.3f", mm);
     }
 
     /** A hand-entered remnant with a gauge and no thickness. */

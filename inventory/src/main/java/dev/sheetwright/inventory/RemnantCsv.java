@@ -2,6 +2,11 @@ package dev.sheetwright.inventory;
 
 import dev.sheetwright.core.material.MaterialType;
 import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
+import java.nio.charset.CodingErrorAction;
 import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
@@ -74,14 +79,15 @@ final class RemnantCsv {
     }
 
     static List<Row> read(Path csv, Clock clock) {
-        String text;
+        byte[] bytes;
         try {
-            text = Files.readString(csv, StandardCharsets.UTF_8);
+            bytes = Files.readAllBytes(csv);
         } catch (NoSuchFileException e) {
             throw new IllegalArgumentException("csv: no such file " + csv);
         } catch (IOException e) {
             throw new UncheckedIOException("csv: cannot read " + csv + ": " + e.getMessage(), e);
         }
+        String text = utf8Text(csv, bytes);
         if (text.startsWith("\uFEFF")) {
             text = text.substring(1);
         }
@@ -120,6 +126,37 @@ final class RemnantCsv {
             rows.add(new RowReader(csv, number, cells, column).read(now));
         }
         return rows;
+    }
+
+    /**
+     * The file's text, refusing bytes that are not UTF-8 text (and NUL bytes, which no CSV text has) with the byte
+     * offset and line of the first one.
+     */
+    private static String utf8Text(Path csv, byte[] bytes) {
+        CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
+        ByteBuffer in = ByteBuffer.wrap(bytes);
+        CharBuffer out = CharBuffer.allocate(bytes.length + 1);
+        CoderResult result = decoder.decode(in, out, true);
+        int bad = result.isError() ? in.position() : -1;
+        for (int i = 0; i < bytes.length && (bad < 0 || i < bad); i++) {
+            if (bytes[i] == 0) {
+                bad = i;
+                break;
+            }
+        }
+        if (bad >= 0) {
+            int line = 1;
+            for (int i = 0; i < bad; i++) {
+                if (bytes[i] == '\n') {
+                    line++;
+                }
+            }
+            throw new IllegalArgumentException(csv + ": is not UTF-8 text (byte offset " + bad + ", line " + line
+                    + "); save the sheet as CSV UTF-8");
+        }
+        decoder.flush(out);
+        return out.flip().toString();
     }
 
     /** Reads the cells of one row, naming the row and column in every error. */

@@ -6,29 +6,53 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sheetwright.core.material.MaterialType;
 import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
+@ParameterizedClass
+@MethodSource("dev.sheetwright.inventory.TestRack#kinds")
 class RemnantCsvTest {
     private static final Instant T0 = Instant.parse("2025-03-14T09:30:00Z");
     private static final String HEADER =
             "id,material,gauge,thickness_mm,width_mm,height_mm,outline,location,added,source,state\n";
 
+    @Parameter
+    TestRack.Kind kind;
+
     @TempDir
     Path dir;
+    private final List<TestRack> racks = new ArrayList<>();
+
+    /** A new empty rack on this run's backend, dropped after the test. */
+    private TestRack rack(String name) {
+        TestRack r = TestRack.make(kind, dir, name);
+        racks.add(r);
+        return r;
+    }
+
+    @AfterEach
+    void drop() {
+        racks.forEach(TestRack::close);
+    }
 
     @Test
     void exportCsv_thenImportIntoEmptyStore_givesTheSameRecords() throws Exception {
         MutableClock clock = new MutableClock(T0);
         List<Remnant> original;
         StringWriter csv = new StringWriter();
-        try (RemnantStore a = RemnantStore.open(dir.resolve("a.db"), clock)) {
+        try (RemnantStore a = rack("a.db").open(clock)) {
             a.add(NewRemnant.manual(MaterialType.GALVANIZED, 24, RemnantOutline.rectangle(1219.2, 762), "A1"));
             clock.advance(Duration.ofMinutes(5));
             a.add(new NewRemnant(MaterialType.STAINLESS, 18, 1.27,
@@ -39,13 +63,14 @@ class RemnantCsvTest {
             a.remove("R-0004");
             // R-0003 used by a plan, so the state column is exercised
             a.reserve(RemnantFilter.any().withMaterial(MaterialType.ALUMINUM), "p", Duration.ofMinutes(1));
-            a.commit("p", Set.of("R-0003"), List.of());
+            a.hold("p", "J-1", Set.of("R-0003"), List.of(), Duration.ofMinutes(1));
+            a.commitPlan("p", "");
             a.exportCsv(csv);
             original = a.list(RemnantFilter.any().withIncludeUsed(true), RemnantSort.ID);
         }
         Path file = Files.writeString(dir.resolve("rack.csv"), csv.toString());
 
-        try (RemnantStore b = RemnantStore.open(dir.resolve("b.db"), new MutableClock(T0.plusSeconds(86_400)))) {
+        try (RemnantStore b = rack("b.db").open(new MutableClock(T0.plusSeconds(86_400)))) {
             List<Remnant> imported = b.importCsv(file);
 
             assertEquals(original, imported);
@@ -66,7 +91,7 @@ class RemnantCsvTest {
         Path file = Files.writeString(dir.resolve("in.csv"), "material,gauge,width_mm,height_mm,id\n"
                 + "galvanized,26,600,300,\n"
                 + "steel,20,900,400,R-0001\n");
-        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"))) {
+        try (RemnantStore store = rack("r.db").open()) {
             List<Remnant> imported = store.importCsv(file);
 
             assertEquals(List.of("R-0002", "R-0001"), RemnantStoreTest.ids(imported));
@@ -78,19 +103,19 @@ class RemnantCsvTest {
 
     @Test
     void importCsv_badRow_importsNothingAndNamesRowAndColumn() throws Exception {
-        Path db = dir.resolve("r.db");
+        TestRack db = rack("r.db");
         Path file = Files.writeString(dir.resolve("in.csv"), HEADER
                 + ",galvanized,26,,600,300,,A1,,,\n"
                 + ",steel,20,,-900,400,,A2,,,\n");
-        try (RemnantStore store = RemnantStore.open(db)) {
+        try (RemnantStore store = db.open()) {
             store.add(NewRemnant.manual(MaterialType.STEEL, 20, RemnantOutline.rectangle(10, 10), ""));
-            List<String> before = InventorySnapshot.of(db);
+            List<String> before = db.snapshot();
 
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.importCsv(file));
 
             assertEquals(file + " row 3, column width_mm: -900.0 is out of range; must be > 0 and at most 100000 mm",
                     e.getMessage());
-            assertEquals(before, InventorySnapshot.of(db));
+            assertEquals(before, db.snapshot());
         }
     }
 
@@ -121,12 +146,12 @@ class RemnantCsvTest {
 
     @Test
     void importCsv_idIssuedBefore_isRefused() throws Exception {
-        Path db = dir.resolve("r.db");
+        TestRack db = rack("r.db");
         Path file = Files.writeString(dir.resolve("in.csv"), HEADER + "R-0001,steel,20,,600,300,,,,,\n");
-        try (RemnantStore store = RemnantStore.open(db)) {
+        try (RemnantStore store = db.open()) {
             store.add(NewRemnant.manual(MaterialType.STEEL, 20, RemnantOutline.rectangle(10, 10), ""));
             IllegalArgumentException inUse = assertThrows(IllegalArgumentException.class, () -> store.importCsv(file));
-            assertEquals(file + " row 2, column id: R-0001 is already in " + db, inUse.getMessage());
+            assertEquals(file + " row 2, column id: R-0001 is already in " + db.shown(), inUse.getMessage());
 
             store.remove("R-0001");
             IllegalArgumentException reused = assertThrows(IllegalArgumentException.class,
@@ -139,7 +164,7 @@ class RemnantCsvTest {
     @Test
     void importCsv_unknownHeaderColumn_isRefused() throws Exception {
         Path file = Files.writeString(dir.resolve("in.csv"), "material,colour\nsteel,red\n");
-        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"))) {
+        try (RemnantStore store = rack("r.db").open()) {
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.importCsv(file));
             assertEquals(file + " row 1, column 2: unknown column 'colour'; expected some of id, material, gauge,"
                     + " thickness_mm, width_mm, height_mm, outline, location, added, source, state", e.getMessage());
@@ -148,21 +173,53 @@ class RemnantCsvTest {
 
     @Test
     void importCsv_missingFile_isBadInput() {
-        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"))) {
+        try (RemnantStore store = rack("r.db").open()) {
             Path missing = dir.resolve("nope.csv");
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.importCsv(missing));
             assertEquals("csv: no such file " + missing, e.getMessage());
         }
     }
 
+    @Test
+    void importCsv_binaryFile_isBadInputNamingTheByteAndNothingChanges() throws Exception {
+        TestRack db = rack("r.db");
+        byte[] bytes = "material,gauge,width_mm,height_mm\nsteel,20,600,300\n".getBytes(StandardCharsets.UTF_8);
+        byte[] binary = java.util.Arrays.copyOf(bytes, bytes.length + 4);
+        binary[bytes.length] = (byte) 0xC3;
+        binary[bytes.length + 1] = (byte) 0x28;
+        Path file = Files.write(dir.resolve("in.csv"), binary);
+        try (RemnantStore store = db.open()) {
+            List<String> before = db.snapshot();
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.importCsv(file));
+            assertEquals(file + ": is not UTF-8 text (byte offset " + bytes.length + ", line 3); save the sheet as"
+                    + " CSV UTF-8", e.getMessage());
+            assertEquals(before, db.snapshot());
+        }
+    }
+
+    @Test
+    void importCsv_latin1Location_isRefusedAsNotUtf8() throws Exception {
+        TestRack db = rack("r.db");
+        String header = "material,gauge,width_mm,height_mm,location\n";
+        String before = "steel,20,600,300,Gie";
+        Path file = Files.write(dir.resolve("in.csv"),
+                (header + before + "\u00dferei\n").getBytes(StandardCharsets.ISO_8859_1));
+        try (RemnantStore store = db.open()) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.importCsv(file));
+            assertEquals(file + ": is not UTF-8 text (byte offset " + (header.length() + before.length())
+                    + ", line 2); save the sheet as CSV UTF-8",
+                    e.getMessage());
+        }
+    }
+
     private void assertImportError(String row, String expected) throws Exception {
-        Path db = dir.resolve("err.db");
+        TestRack db = rack("err.db");
         Path file = Files.writeString(dir.resolve("err.csv"), HEADER + row);
-        try (RemnantStore store = RemnantStore.open(db)) {
-            List<String> before = InventorySnapshot.of(db);
+        try (RemnantStore store = db.open()) {
+            List<String> before = db.snapshot();
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.importCsv(file));
             assertEquals(file + " " + expected, e.getMessage());
-            assertEquals(before, InventorySnapshot.of(db));
+            assertEquals(before, db.snapshot());
         }
     }
 }

@@ -10,25 +10,35 @@ import java.time.Duration;
 import java.time.Instant;
 import java.util.List;
 import java.util.Set;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
+/** Reservations (leases) and cutting what a plan reserved, on both backends. */
+@ParameterizedClass
+@MethodSource("dev.sheetwright.inventory.TestRack#kinds")
 class RemnantReservationTest {
     private static final Instant T0 = Instant.parse("2025-03-14T09:30:00Z");
     private static final Duration TTL = Duration.ofMinutes(10);
     private static final RemnantFilter GALV = RemnantFilter.any().withMaterial(MaterialType.GALVANIZED);
 
+    @Parameter
+    TestRack.Kind kind;
+
     @TempDir
     Path dir;
-    private Path file;
+    private TestRack rack;
     private MutableClock clock;
 
     @BeforeEach
     void fill() {
-        file = dir.resolve("r.db");
+        rack = TestRack.make(kind, dir, "r.db");
         clock = new MutableClock(T0);
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             store.add(galv(1200, 600));                                      // R-0001
             store.add(galv(600, 300));                                       // R-0002
             store.add(galv(900, 900));                                       // R-0003
@@ -36,18 +46,31 @@ class RemnantReservationTest {
         }
     }
 
+    @AfterEach
+    void drop() {
+        if (rack != null) {
+            rack.close();
+        }
+    }
+
     private static NewRemnant galv(double w, double h) {
         return NewRemnant.manual(MaterialType.GALVANIZED, 24, RemnantOutline.rectangle(w, h), "rack");
     }
 
-    private static NewRemnant offcut(double w, double h, int sheet) {
-        return NewRemnant.offcut(MaterialType.GALVANIZED, 24, null, RemnantOutline.rectangle(w, h), "rack",
+    static NewRemnant offcut(double w, double h, int sheet) {
+        return NewRemnant.offcut(MaterialType.GALVANIZED, 24, null, RemnantOutline.rectangle(w, h), "",
                 "J-17", sheet);
+    }
+
+    /** Settles plan {@code planId} with what it cuts and leaves, then commits it at rack slot "rack". */
+    static List<Remnant> cut(RemnantStore store, String planId, Set<String> used, List<NewRemnant> offcuts) {
+        store.hold(planId, "J-17", used, offcuts, TTL);
+        return store.commitPlan(planId, "rack");
     }
 
     @Test
     void reserve_matchingAvailable_flipsThemToReservedWithOwnerAndExpiry() {
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             List<Remnant> got = store.reserve(GALV, "plan-a", TTL);
 
             assertEquals(List.of("R-0001", "R-0002", "R-0003"), ids(got));
@@ -62,7 +85,7 @@ class RemnantReservationTest {
 
     @Test
     void reserve_maxCount_takesSmallestFirstAndOthersGetTheRest() {
-        try (RemnantStore a = RemnantStore.open(file, clock); RemnantStore b = RemnantStore.open(file, clock)) {
+        try (RemnantStore a = rack.open(clock); RemnantStore b = rack.open(clock)) {
             assertEquals(List.of("R-0002"), ids(a.reserve(GALV, "plan-a", TTL, 1)));
 
             assertEquals(List.of("R-0001", "R-0003"), ids(b.reserve(GALV, "plan-b", TTL)));
@@ -71,8 +94,8 @@ class RemnantReservationTest {
     }
 
     @Test
-    void reserve_staleReservation_canBeTakenByAnotherPlanAndTheFirstCannotCommitIt() {
-        try (RemnantStore a = RemnantStore.open(file, clock); RemnantStore b = RemnantStore.open(file, clock)) {
+    void reserve_staleReservation_canBeTakenByAnotherPlanAndTheFirstCannotSettleIt() {
+        try (RemnantStore a = rack.open(clock); RemnantStore b = rack.open(clock)) {
             a.reserve(GALV, "plan-a", Duration.ofMinutes(1));
             assertEquals(List.of(), b.reserve(GALV, "plan-b", TTL));
 
@@ -81,21 +104,23 @@ class RemnantReservationTest {
 
             assertEquals(List.of("R-0002"), ids(taken));
             RemnantConflictException e = assertThrows(RemnantConflictException.class,
-                    () -> a.commit("plan-a", Set.of("R-0002"), List.of()));
-            assertEquals("R-0002 is not reserved by plan plan-a (it is reserved by plan plan-b until "
-                    + T0.plus(Duration.ofMinutes(11)) + "); reserve it before committing", e.getMessage());
-            assertEquals(List.of(), b.commit("plan-b", Set.of("R-0002"), List.of()));
+                    () -> cut(a, "plan-a", Set.of("R-0002"), List.of()));
+            assertEquals("R-0002 is no longer reserved by plan plan-a (it is reserved by plan plan-b until "
+                    + T0.plus(Duration.ofMinutes(11)) + "); its reservation ran out while nesting; nest again",
+                    e.getMessage());
+            assertEquals(List.of(), cut(b, "plan-b", Set.of("R-0002"), List.of()));
             assertEquals(RemnantState.USED, b.get("R-0002").orElseThrow().state());
         }
     }
 
     @Test
-    void commit_expiredButUntaken_stillBelongsToThePlan() {
-        try (RemnantStore a = RemnantStore.open(file, clock)) {
+    void commit_settledLeaseExpiredButUntaken_stillBelongsToThePlan() {
+        try (RemnantStore a = rack.open(clock)) {
             a.reserve(GALV, "plan-a", Duration.ofMinutes(1), 1);
+            a.hold("plan-a", "J-17", Set.of("R-0002"), List.of(), Duration.ofMinutes(1));
             clock.advance(Duration.ofHours(1));
 
-            a.commit("plan-a", Set.of("R-0002"), List.of());
+            a.commitPlan("plan-a", "");
 
             assertEquals(RemnantState.USED, a.get("R-0002").orElseThrow().state());
         }
@@ -103,14 +128,15 @@ class RemnantReservationTest {
 
     @Test
     void commit_marksUsedReleasesTheRestAndAddsOffcutsWithIds() {
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             store.reserve(GALV, "plan-a", TTL);
 
-            List<Remnant> offcuts = store.commit("plan-a", Set.of("R-0001", "R-0003"),
+            List<Remnant> offcuts = cut(store, "plan-a", Set.of("R-0001", "R-0003"),
                     List.of(offcut(400, 300, 1), offcut(200, 900, 2)));
 
             assertEquals(List.of("R-0005", "R-0006"), ids(offcuts));
             assertEquals("job J-17 sheet 2", offcuts.get(1).source().text());
+            assertEquals("rack", offcuts.get(1).location());
             assertEquals(RemnantState.AVAILABLE, offcuts.get(0).state());
             assertEquals(RemnantState.USED, store.get("R-0001").orElseThrow().state());
             assertEquals(RemnantState.USED, store.get("R-0003").orElseThrow().state());
@@ -124,91 +150,92 @@ class RemnantReservationTest {
     }
 
     @Test
-    void commit_sameRemnantTwice_isRefusedAsAlreadyUsed() {
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+    void hold_remnantAlreadyUsed_isRefusedAndChangesNothing() {
+        try (RemnantStore store = rack.open(clock)) {
             store.reserve(GALV, "plan-a", TTL);
-            store.commit("plan-a", Set.of("R-0001"), List.of());
-            List<String> before = InventorySnapshot.of(file);
+            cut(store, "plan-a", Set.of("R-0001"), List.of());
+            List<String> before = rack.snapshot();
 
             RemnantConflictException e = assertThrows(RemnantConflictException.class,
-                    () -> store.commit("plan-a", Set.of("R-0001"), List.of(offcut(10, 10, 1))));
+                    () -> cut(store, "plan-b", Set.of("R-0001"), List.of(offcut(10, 10, 1))));
 
-            assertEquals("R-0001 is already used; plan plan-a cannot cut it again", e.getMessage());
-            assertEquals(before, InventorySnapshot.of(file));
+            assertEquals("R-0001 is no longer reserved by plan plan-b (it is used); its reservation ran out while"
+                    + " nesting; nest again", e.getMessage());
+            assertEquals(before, rack.snapshot());
         }
     }
 
     @Test
-    void commit_notReserved_isRefusedAndChangesNothing() {
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+    void hold_notReserved_isRefusedAndChangesNothing() {
+        try (RemnantStore store = rack.open(clock)) {
             store.reserve(GALV, "plan-a", TTL, 1);
-            List<String> before = InventorySnapshot.of(file);
+            List<String> before = rack.snapshot();
 
             RemnantConflictException e = assertThrows(RemnantConflictException.class,
-                    () -> store.commit("plan-a", Set.of("R-0002", "R-0004"), List.of(offcut(10, 10, 1))));
+                    () -> cut(store, "plan-a", Set.of("R-0002", "R-0004"), List.of(offcut(10, 10, 1))));
 
-            assertEquals("R-0004 is not reserved by plan plan-a (it is available); reserve it before committing",
-                    e.getMessage());
-            assertEquals(before, InventorySnapshot.of(file));
+            assertEquals("R-0004 is no longer reserved by plan plan-a (it is available); its reservation ran out"
+                    + " while nesting; nest again", e.getMessage());
+            assertEquals(before, rack.snapshot());
         }
     }
 
     @Test
-    void commit_unknownId_namesIdAndFile() {
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+    void hold_unknownId_namesIdAndRack() {
+        try (RemnantStore store = rack.open(clock)) {
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                    () -> store.commit("plan-a", Set.of("R-0099"), List.of()));
-            assertEquals("no remnant R-0099 in " + file, e.getMessage());
+                    () -> cut(store, "plan-a", Set.of("R-0099"), List.of()));
+            assertEquals("no remnant R-0099 in " + rack.shown(), e.getMessage());
         }
     }
 
     @Test
     void commit_failureAfterFirstUpdate_leavesInventoryExactlyAsItWas() {
-        try (RemnantStore setup = RemnantStore.open(file, clock)) {
+        try (RemnantStore setup = rack.open(clock)) {
             setup.reserve(GALV, "plan-a", TTL);
+            setup.hold("plan-a", "J-17", Set.of("R-0001", "R-0002"), List.of(offcut(10, 10, 1)), TTL);
         }
-        List<String> before = InventorySnapshot.of(file);
-        RemnantStore.FaultPoint crash = step -> {
+        List<String> before = rack.snapshot();
+        FaultPoint crash = step -> {
             if (step.equals("commit:used R-0001")) {
                 throw new IllegalStateException("simulated crash at " + step);
             }
         };
-        try (RemnantStore store = RemnantStore.open(file, clock, Migrations.ALL, crash)) {
+        try (RemnantStore store = rack.open(clock, Migrations.ALL, crash)) {
             IllegalStateException e = assertThrows(IllegalStateException.class,
-                    () -> store.commit("plan-a", Set.of("R-0001", "R-0002"), List.of(offcut(10, 10, 1))));
+                    () -> store.commitPlan("plan-a", "rack"));
             assertEquals("simulated crash at commit:used R-0001", e.getMessage());
         }
 
-        assertEquals(before, InventorySnapshot.of(file));
-        try (RemnantStore after = RemnantStore.open(file, clock)) {
-            assertEquals(List.of("R-0001", "R-0002", "R-0003"), ids(after.reservedFor("plan-a")));
-            assertEquals("R-0005", after.commit("plan-a", Set.of("R-0001"), List.of(offcut(10, 10, 1)))
-                    .get(0).id());
+        assertEquals(before, rack.snapshot());
+        try (RemnantStore after = rack.open(clock)) {
+            assertEquals(List.of("R-0001", "R-0002"), ids(after.reservedFor("plan-a")));
+            assertEquals("R-0005", after.commitPlan("plan-a", "rack").get(0).id());
         }
     }
 
     @Test
     void commit_databaseRefusesSecondOffcut_rollsBackUsedAndFirstOffcut() {
-        try (RemnantStore setup = RemnantStore.open(file, clock)) {
+        try (RemnantStore setup = rack.open(clock)) {
             setup.reserve(GALV, "plan-a", TTL);
+            setup.hold("plan-a", "J-17", Set.of("R-0001", "R-0003"),
+                    List.of(offcut(400, 300, 1), offcut(200, 900, 2)), TTL);
         }
-        InventorySnapshot.execute(file, "CREATE TRIGGER disk_full BEFORE INSERT ON remnant"
-                + " WHEN NEW.source = 'job J-17 sheet 2' BEGIN SELECT RAISE(ABORT, 'disk full'); END");
-        List<String> before = InventorySnapshot.of(file);
+        rack.refuseInsertsOfSource("job J-17 sheet 2", "disk full");
+        List<String> before = rack.snapshot();
 
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             InventoryStorageException e = assertThrows(InventoryStorageException.class,
-                    () -> store.commit("plan-a", Set.of("R-0001", "R-0003"),
-                            List.of(offcut(400, 300, 1), offcut(200, 900, 2))));
+                    () -> store.commitPlan("plan-a", "rack"));
             assertEquals(true, e.getMessage().contains("disk full"), e.getMessage());
         }
 
-        assertEquals(before, InventorySnapshot.of(file));
+        assertEquals(before, rack.snapshot());
     }
 
     @Test
     void release_returnsThePlansRemnantsToTheRack() {
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             store.reserve(GALV, "plan-a", TTL);
 
             assertEquals(3, store.release("plan-a"));
@@ -220,17 +247,17 @@ class RemnantReservationTest {
 
     @Test
     void remove_liveReservation_isRefused() {
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             store.reserve(GALV, "plan-a", TTL, 1);
             RemnantConflictException e = assertThrows(RemnantConflictException.class, () -> store.remove("R-0002"));
-            assertEquals("R-0002 is reserved by plan plan-a until 2025-03-14T09:40:00Z; release that plan first",
-                    e.getMessage());
+            assertEquals("R-0002 is reserved by plan plan-a until 2025-03-14T09:40:00Z; release that plan first"
+                    + " ('sheetwright release OUT')", e.getMessage());
         }
     }
 
     @Test
     void reserve_badArguments_nameTheField() {
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             assertEquals("ttl: PT0S is out of range; must be > 0 and at most PT720H", assertThrows(
                     IllegalArgumentException.class, () -> store.reserve(GALV, "p", Duration.ZERO)).getMessage());
             assertEquals("planId: ' ' must be 1 to 100 printable characters without surrounding blanks",

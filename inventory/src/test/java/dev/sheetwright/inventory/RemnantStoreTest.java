@@ -6,94 +6,111 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sheetwright.core.material.MaterialType;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
+/** Opening, migrating and the records of the rack, on both backends. */
+@ParameterizedClass
+@MethodSource("dev.sheetwright.inventory.TestRack#kinds")
 class RemnantStoreTest {
     private static final double EPS = 1e-9;
     private static final Instant T0 = Instant.parse("2025-03-14T09:30:00Z");
 
+    @Parameter
+    TestRack.Kind kind;
+
     @TempDir
     Path dir;
+    private TestRack rack;
+
+    @BeforeEach
+    void make() {
+        rack = TestRack.make(kind, dir, "r.db");
+    }
+
+    @AfterEach
+    void drop() {
+        if (rack != null) {
+            rack.close();
+        }
+    }
 
     private static NewRemnant galv(double w, double h, String location) {
         return NewRemnant.manual(MaterialType.GALVANIZED, 24, RemnantOutline.rectangle(w, h), location);
     }
 
     @Test
-    void open_emptyFolder_createsFolderFileAndLatestSchema() {
-        Path file = dir.resolve("deep/er/remnants.db");
-
-        try (RemnantStore store = RemnantStore.open(file)) {
-            assertTrue(Files.isRegularFile(file));
+    void open_newRack_hasTheLatestSchema() {
+        try (RemnantStore store = rack.open()) {
             assertEquals(Migrations.ALL.size(), store.schemaVersion());
             assertEquals(List.of(), store.list(RemnantFilter.any(), RemnantSort.ID));
         }
-        List<String> snapshot = InventorySnapshot.of(file);
+        List<String> snapshot = rack.snapshot();
         assertEquals(Migrations.ALL.size(), snapshot.stream().filter(r -> r.startsWith("version=")).count());
         assertTrue(snapshot.stream().anyMatch(r -> r.startsWith("version=1 description=initial schema")),
                 snapshot.toString());
-        assertTrue(snapshot.stream().anyMatch(r -> r.startsWith("version=2 description=plans and offcut ids")),
+        assertTrue(snapshot.stream().anyMatch(r -> r.startsWith("version=3 description=plans keep")),
                 snapshot.toString());
     }
 
     @Test
-    void open_existingFile_doesNotRerunMigrationsAndKeepsData() {
-        Path file = dir.resolve("remnants.db");
+    void open_existingRack_doesNotRerunMigrationsAndKeepsData() {
         MutableClock clock = new MutableClock(T0);
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             store.add(galv(1200, 600, "A1"));
         }
-        List<String> before = InventorySnapshot.of(file);
+        List<String> before = rack.snapshot();
         clock.advance(java.time.Duration.ofDays(1));
 
-        try (RemnantStore store = RemnantStore.open(file, clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             assertEquals(Migrations.ALL.size(), store.schemaVersion());
             assertEquals(1, store.list(RemnantFilter.any(), RemnantSort.ID).size());
         }
 
-        assertEquals(before, InventorySnapshot.of(file));
+        assertEquals(before, rack.snapshot());
     }
 
     @Test
     void open_withAppendedMigration_appliesOnlyTheNewStep() {
-        Path file = dir.resolve("remnants.db");
-        try (RemnantStore store = RemnantStore.open(file)) {
+        try (RemnantStore store = rack.open()) {
             store.add(galv(1200, 600, "A1"));
         }
-        Migration v3 = new Migration(3, "add note column",
+        Migration v4 = new Migration(4, "add note column",
                 List.of("ALTER TABLE remnant ADD COLUMN note TEXT NOT NULL DEFAULT ''"));
 
-        try (RemnantStore store = RemnantStore.open(file, java.time.Clock.systemUTC(),
-                List.of(Migrations.V1, Migrations.V2, v3), RemnantStore.FaultPoint.NONE)) {
-            assertEquals(3, store.schemaVersion());
+        try (RemnantStore store = rack.open(java.time.Clock.systemUTC(),
+                List.of(Migrations.V1, Migrations.V2, Migrations.V3, v4), FaultPoint.NONE)) {
+            assertEquals(4, store.schemaVersion());
             assertEquals("A1", store.get("R-0001").orElseThrow().location());
         }
-        List<String> snapshot = InventorySnapshot.of(file);
+        List<String> snapshot = rack.snapshot();
         assertTrue(snapshot.get(0).contains("note="), snapshot.get(0));
-        assertEquals(3, snapshot.stream().filter(r -> r.startsWith("version=")).count());
+        assertEquals(4, snapshot.stream().filter(r -> r.startsWith("version=")).count());
     }
 
     @Test
-    void open_fileFromNewerProgram_refusesWithVersions() {
-        Path file = dir.resolve("remnants.db");
-        RemnantStore.open(file).close();
-        InventorySnapshot.execute(file, "INSERT INTO schema_version VALUES (7, 'future', '2030-01-01T00:00:00Z')");
+    void open_rackFromNewerProgram_refusesWithVersions() {
+        rack.open().close();
+        rack.execute("INSERT INTO schema_version VALUES (7, 'future', '2030-01-01T00:00:00Z')");
 
-        InventoryStorageException e = assertThrows(InventoryStorageException.class, () -> RemnantStore.open(file));
+        InventoryStorageException e = assertThrows(InventoryStorageException.class, () -> rack.open());
 
-        assertEquals("inventory: " + file + " has schema version 7; this program knows versions up to 2",
+        assertEquals("inventory: " + rack.shown() + " has schema version 7; this program knows versions up to 3",
                 e.getMessage());
     }
 
     @Test
     void add_thenGetAndList_roundTripsEveryField() {
         MutableClock clock = new MutableClock(T0);
-        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"), clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             RemnantOutline l = RemnantOutline.parse("0,0 1000,0 1000,300 400,300 400,800 0,800");
             NewRemnant in = new NewRemnant(MaterialType.STAINLESS, null, 1.2, l, "rack B, slot 3",
                     RemnantSource.job("Smith Kitchen", 2));
@@ -120,7 +137,7 @@ class RemnantStoreTest {
 
     @Test
     void add_ids_areSequentialAndNeverReusedAfterRemove() {
-        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"))) {
+        try (RemnantStore store = rack.open()) {
             assertEquals("R-0001", store.add(galv(100, 100, "")).id());
             assertEquals("R-0002", store.add(galv(100, 100, "")).id());
             store.remove("R-0002");
@@ -129,29 +146,28 @@ class RemnantStoreTest {
             assertEquals("R-0003", store.add(galv(100, 100, "")).id());
             assertFalse(store.get("R-0002").isPresent());
         }
-        try (RemnantStore again = RemnantStore.open(dir.resolve("r.db"))) {
+        try (RemnantStore again = rack.open()) {
             assertEquals("R-0004", again.add(galv(100, 100, "")).id());
         }
     }
 
     @Test
     void remove_unknownId_namesIdAndFileAndChangesNothing() {
-        Path file = dir.resolve("r.db");
-        try (RemnantStore store = RemnantStore.open(file)) {
+        try (RemnantStore store = rack.open()) {
             store.add(galv(100, 100, ""));
-            List<String> before = InventorySnapshot.of(file);
+            List<String> before = rack.snapshot();
 
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                     () -> store.removeAll(List.of("R-0001", "R-0099")));
 
-            assertEquals("no remnant R-0099 in " + file, e.getMessage());
-            assertEquals(before, InventorySnapshot.of(file));
+            assertEquals("no remnant R-0099 in " + rack.shown(), e.getMessage());
+            assertEquals(before, rack.snapshot());
         }
     }
 
     @Test
     void remove_malformedId_namesTheValue() {
-        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"))) {
+        try (RemnantStore store = rack.open()) {
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.remove("42"));
             assertEquals("id: '42' is not a remnant id; expected R- followed by a number from 1, e.g. R-0042",
                     e.getMessage());
@@ -161,7 +177,7 @@ class RemnantStoreTest {
     @Test
     void list_filterAndSort_selectAndOrder() {
         MutableClock clock = new MutableClock(T0);
-        try (RemnantStore store = RemnantStore.open(dir.resolve("r.db"), clock)) {
+        try (RemnantStore store = rack.open(clock)) {
             store.add(galv(500, 500, "a"));                        // R-0001, 250000
             clock.advance(java.time.Duration.ofHours(1));
             store.add(galv(1000, 400, "b"));                       // R-0002, 400000

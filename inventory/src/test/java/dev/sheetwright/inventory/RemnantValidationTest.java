@@ -2,6 +2,7 @@ package dev.sheetwright.inventory;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.units.LengthUnit;
@@ -85,10 +86,10 @@ class RemnantValidationTest {
 
     @Test
     void store_afterRejectedInputs_isUnchanged() {
-        Path file = dir.resolve("r.db");
-        try (RemnantStore store = RemnantStore.open(file)) {
+        TestRack rack = TestRack.make(TestRack.Kind.SQLITE, dir, "r.db");
+        try (RemnantStore store = rack.open()) {
             store.add(NewRemnant.manual(MaterialType.STEEL, 20, RemnantOutline.rectangle(100, 100), ""));
-            List<String> before = InventorySnapshot.of(file);
+            List<String> before = rack.snapshot();
 
             assertThrows(IllegalArgumentException.class, () -> store.add(NewRemnant.manual(
                     MaterialType.parse("copper"), 20, RemnantOutline.rectangle(100, 100), "")));
@@ -98,7 +99,7 @@ class RemnantValidationTest {
                     MaterialType.STEEL, 20, RemnantOutline.parse("0,0 10,10 10,0 0,10"), "")));
             assertThrows(IllegalArgumentException.class, () -> store.add(null));
 
-            assertEquals(before, InventorySnapshot.of(file));
+            assertEquals(before, rack.snapshot());
             assertEquals(1, store.list(RemnantFilter.any(), RemnantSort.ID).size());
         }
     }
@@ -106,7 +107,33 @@ class RemnantValidationTest {
     @Test
     void open_folderInsteadOfFile_isRejected() throws Exception {
         Path folder = Files.createDirectory(dir.resolve("folder"));
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> RemnantStore.open(folder));
+        RackAccessException e = assertThrows(RackAccessException.class, () -> RemnantStore.open(folder));
         assertEquals("inventory: " + folder + " is a folder; give a database file", e.getMessage());
+    }
+
+    @Test
+    void newRemnant_gaugeAndThicknessDisagree_refusedNamingBoth() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new NewRemnant(
+                MaterialType.GALVANIZED, 24, 6.35, RemnantOutline.rectangle(1117.6, 1117.6), "",
+                RemnantSource.manual()));
+        assertTrue(e.getMessage().startsWith("gauge/thickness_mm: galvanized 24 ga is 0.701 mm"), e.getMessage());
+        assertTrue(e.getMessage().endsWith("but the thickness given is 6.350 mm; give the gauge or the thickness"
+                + " that is right"), e.getMessage());
+    }
+
+    @Test
+    void newRemnant_gaugeAndItsOwnTableThickness_accepted() {
+        // 24 ga galvanized: 0.0276 in nominal [S:SMACNA-GALV] = 0.70104 mm
+        NewRemnant r = new NewRemnant(MaterialType.GALVANIZED, 24, 0.70104, RemnantOutline.rectangle(100, 100), "",
+                RemnantSource.manual());
+        assertEquals(24, r.gauge());
+    }
+
+    @Test
+    void newRemnant_gaugeMissingFromTheTable_refusedListingTheGauges() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> NewRemnant.manual(
+                MaterialType.GALVANIZED, 7, RemnantOutline.rectangle(100, 100), ""));
+        assertTrue(e.getMessage().startsWith("gauge: 7 is not in the galvanized gauge table ("), e.getMessage());
+        assertTrue(e.getMessage().contains("valid gauges: "), e.getMessage());
     }
 }

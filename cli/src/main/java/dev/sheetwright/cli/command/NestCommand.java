@@ -100,7 +100,7 @@ public final class NestCommand implements Callable<Integer> {
                     + " offcuts (else run 'sheetwright commit OUT' later)")
     boolean commitNow;
 
-    @Option(names = "--location", paramLabel = "TEXT", defaultValue = "",
+    @Option(names = "--location", paramLabel = "TEXT",
             description = "with --commit: where the new offcuts are put on the rack")
     String location;
     @Mixin
@@ -123,6 +123,11 @@ public final class NestCommand implements Callable<Integer> {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(),
                     "--reserve-minutes must be from 1 to 1440, got " + reserveMinutes);
         }
+        if (location != null && !commitNow) {
+            throw new picocli.CommandLine.ParameterException(spec.commandLine(), "--location is used only with"
+                    + " --commit; give --commit too, or give the location later: sheetwright commit OUT --location "
+                    + location);
+        }
         OutputFolder.check(out); // before the long nest, not after it
         JobReader.JobFile file = JobReader.readFull(jobFile.path());
         Job job = file.job();
@@ -136,7 +141,7 @@ public final class NestCommand implements Callable<Integer> {
         NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
         long start = System.nanoTime();
         try (RackPlanning rack = planned
-                ? RackPlanning.open(inventory.file(), job, Duration.ofMinutes(reserveMinutes)) : null) {
+                ? RackPlanning.open(inventory.location(), job, Duration.ofMinutes(reserveMinutes)) : null) {
             List<StockRemnant> fromRack = rack == null ? List.of() : rack.reserve(useRemnants, remnantIds);
             JobNest nest = JobNest.run(job, jobFile.label(), options, fromRack);
             progress.done();
@@ -157,7 +162,7 @@ public final class NestCommand implements Callable<Integer> {
                 PlanReport.planned(spec.commandLine().getOut(), plan, out);
                 if (commitNow) {
                     PlanReport.committed(spec.commandLine().getOut(), plan,
-                            RackCommit.commit(rack.store(), plan, location));
+                            RackCommit.commit(rack.store(), plan, location == null ? "" : location));
                 }
             }
             return nest.result().unplaced().isEmpty() ? ExitCodes.OK : ExitCodes.UNPLACED;

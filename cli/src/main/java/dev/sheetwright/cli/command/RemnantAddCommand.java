@@ -61,7 +61,7 @@ public final class RemnantAddCommand extends RemnantSubcommand {
                 : SizeText.parseLength("--thickness", thickness, units.unit());
         RemnantOutline outline = outline();
         NewRemnant remnant = new NewRemnant(m, gauge, thicknessMm, outline, location, RemnantSource.manual());
-        Remnant added = inventory.apply(store -> store.add(remnant));
+        Remnant added = inventory.applyCreating(store -> store.add(remnant));
         out.println("added " + added.id() + ": " + m.word() + " "
                 + SizeFormat.length(added.widthMm(), units.unit()) + " x "
                 + SizeFormat.length(added.heightMm(), units.unit()) + " " + units.unit().symbol()

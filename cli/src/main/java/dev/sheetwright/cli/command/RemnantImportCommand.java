@@ -19,7 +19,7 @@ public final class RemnantImportCommand extends RemnantSubcommand {
 
     @Override
     void run(PrintWriter out) {
-        List<Remnant> imported = inventory.apply(store -> store.importCsv(csv));
+        List<Remnant> imported = inventory.applyCreating(store -> store.importCsv(csv));
         out.println("imported " + imported.size() + " remnant(s)"
                 + (imported.isEmpty() ? "" : ": "
                 + imported.stream().map(Remnant::id).collect(Collectors.joining(" "))));

@@ -43,7 +43,7 @@ public final class JobReader {
 
     /** One reader per fitting family; a new family adds its reader here. */
     private static final List<FittingReader> FAMILIES = List.of(new PipeReader(), new ReducerReader(),
-            new ElbowReader(), new BranchReader(), new TransitionReader());
+            new ElbowReader(), new BranchReader(), new TransitionReader(), new RectReader());
     private static final Map<String, FittingReader> BY_TYPE = byType(FAMILIES);
 
     /** A job file read whole: the job, how its contours are cut (from {@code cutting:}) and its {@code quote:} section. */

@@ -1,58 +1,72 @@
 package dev.sheetwright.cli.mixin;
 
+import dev.sheetwright.inventory.RackLocation;
 import dev.sheetwright.inventory.RemnantStore;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.function.Consumer;
 import java.util.function.Function;
 import picocli.CommandLine.Option;
 
-/** {@code --inventory FILE}: the remnant database to use (default {@code ~/.sheetwright/remnants.db}). */
+/**
+ * {@code --inventory FILE|URL}: the remnant rack to use, a SQLite file or a {@code postgresql://} server database;
+ * without it {@code SHEETWRIGHT_INVENTORY}, else {@code ~/.sheetwright/remnants.db}. Only the commands that add
+ * remnants ({@code remnant add}, {@code remnant import}) may start a new rack; the others refuse a missing one.
+ */
 public final class InventoryOption {
-    @Option(names = "--inventory", paramLabel = "FILE",
-            description = "Remnant inventory database (created on first use; default: ~/.sheetwright/remnants.db).")
-    private Path file;
+    @Option(names = "--inventory", paramLabel = "FILE|URL",
+            description = "Remnant rack: a SQLite file or postgresql://USER@HOST[:PORT]/DATABASE (password from"
+                    + " PGPASSWORD or ~/.pgpass); default: $SHEETWRIGHT_INVENTORY, else ~/.sheetwright/remnants.db.")
+    private String value;
 
-    /** The file given, or the default. */
-    public Path file() {
-        return file != null ? file : RemnantStore.defaultPath();
+    /** Where the rack is: {@code --inventory}, else {@code SHEETWRIGHT_INVENTORY}, else the default file. */
+    public RackLocation location() {
+        return locate(value);
+    }
+
+    /** {@code value} when given, else {@code SHEETWRIGHT_INVENTORY}, else the default file. */
+    public static RackLocation locate(String value) {
+        if (value != null) {
+            return RackLocation.parse(value);
+        }
+        String env = System.getenv(RemnantStore.ENVIRONMENT_VARIABLE);
+        if (env != null && !env.isBlank()) {
+            return RackLocation.parse(env);
+        }
+        return new RackLocation.File(RemnantStore.defaultPath());
     }
 
     /** True when {@code --inventory} was given. */
     public boolean given() {
-        return file != null;
+        return value != null;
     }
 
-    /** Opens the inventory. */
+    /** Opens the rack, which must exist. */
     public RemnantStore open() {
-        return RemnantStore.open(file());
+        return RemnantStore.open(location(), false);
     }
 
-    /** Opens the inventory, returns what {@code work} makes of it, and closes it again. */
+    /** Opens the rack, starting a new one when there is none yet. */
+    public RemnantStore openOrCreate() {
+        return RemnantStore.open(location(), true);
+    }
+
+    /** Opens the existing rack, returns what {@code work} makes of it, and closes it again. */
     public <T> T apply(Function<RemnantStore, T> work) {
         try (RemnantStore store = open()) {
             return work.apply(store);
         }
     }
 
-    /** Opens the inventory, does {@code work} with it, and closes it again. */
+    /** Opens the existing rack, does {@code work} with it, and closes it again. */
     public void use(Consumer<RemnantStore> work) {
         try (RemnantStore store = open()) {
             work.accept(store);
         }
     }
 
-    /**
-     * Opens an inventory that must already exist: planning and committing never create one, so a mistyped path
-     * is refused instead of silently starting an empty rack.
-     *
-     * @throws IllegalArgumentException naming the file when there is none
-     */
-    public static RemnantStore openExisting(Path file) {
-        if (!Files.isRegularFile(file)) {
-            throw new IllegalArgumentException("--inventory " + file + ": no inventory there; check the path, or"
-                    + " start one with 'sheetwright remnant add ... --inventory " + file + "'");
+    /** Opens the rack (starting one if needed), returns what {@code work} makes of it, and closes it again. */
+    public <T> T applyCreating(Function<RemnantStore, T> work) {
+        try (RemnantStore store = openOrCreate()) {
+            return work.apply(store);
         }
-        return RemnantStore.open(file);
     }
 }

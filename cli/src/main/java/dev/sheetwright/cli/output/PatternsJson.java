@@ -8,6 +8,8 @@ import dev.sheetwright.core.develop.LayoutValue;
 import dev.sheetwright.core.geom.Box2;
 import dev.sheetwright.core.geom.Pattern;
 import dev.sheetwright.core.job.Job;
+import dev.sheetwright.core.units.FractionFormat;
+import dev.sheetwright.core.units.LengthUnit;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -67,6 +69,16 @@ public final class PatternsJson {
                     layout.put(t.key(), table);
                 }
                 e.put("layout", layout);
+                if (job.unit() == LengthUnit.INCH) {
+                    // the same lengths as the shop reads them off a rule: to the nearest 1/16 in
+                    Map<String, Object> fractions = new LinkedHashMap<>();
+                    for (LayoutValue v : piece.layout().values()) {
+                        if (v.kind() == LayoutValue.Kind.LENGTH) {
+                            fractions.put(v.key(), FractionFormat.SIXTEENTHS.format(v.value()));
+                        }
+                    }
+                    e.put("layoutFractions", fractions);
+                }
                 pieces.add(e);
             }
         }

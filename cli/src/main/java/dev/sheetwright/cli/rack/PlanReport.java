@@ -31,4 +31,10 @@ public final class PlanReport {
                         + (r.location().isEmpty() ? "" : " at " + r.location())).toList()));
         w.flush();
     }
+
+    public static void released(PrintWriter w, RackPlan plan, int back) {
+        w.printf(Locale.ROOT, "released plan %s: %d remnant(s) back on the rack%s; the plan can no longer be"
+                + " committed%n", plan.id(), back, back == 0 ? "" : " (" + String.join(", ", plan.remnantsUsed()) + ")");
+        w.flush();
+    }
 }

@@ -19,7 +19,7 @@ import java.util.Map;
  * {@code sheetwright commit}. Lengths are in the job's unit.
  *
  * @param id            the plan id (a random UUID), as the inventory knows it
- * @param inventory     the inventory file the plan was made against (absolute)
+ * @param inventory     the rack the plan was made against: its file, or its server URL without a password
  * @param job           the job name, for the offcuts' source
  * @param unit          the job's unit
  * @param material      the job's material
@@ -30,7 +30,7 @@ import java.util.Map;
  * @param offcuts       the new offcuts to record at commit, each with the id already etched on its sheet
  * @param minOffcut     the smallest offcut recorded
  */
-public record RackPlan(String id, Path inventory, String job, LengthUnit unit, MaterialType material, Integer gauge,
+public record RackPlan(String id, String inventory, String job, LengthUnit unit, MaterialType material, Integer gauge,
         double thicknessMm, Instant reservedUntil, List<String> remnantsUsed, List<PlannedOffcut> offcuts,
         MinOffcut minOffcut) {
 
@@ -45,6 +45,15 @@ public record RackPlan(String id, Path inventory, String job, LengthUnit unit, M
         offcuts = List.copyOf(offcuts);
     }
 
+    /**
+     * Opens the rack this plan holds remnants in: {@code inventory} when given (an {@code --inventory} value), else
+     * the one it was made against (whose password, if any, comes from PGPASSWORD or ~/.pgpass).
+     */
+    public dev.sheetwright.inventory.RemnantStore openRack(String inventory) {
+        return dev.sheetwright.inventory.RemnantStore.open(dev.sheetwright.cli.mixin.InventoryOption.locate(
+                inventory != null ? inventory : this.inventory), false);
+    }
+
     /** The offcut planned for sheet {@code sheet} (from 1), or null. */
     public PlannedOffcut offcutOfSheet(int sheet) {
         return offcuts.stream().filter(o -> o.sheet() == sheet).findFirst().orElse(null);
@@ -54,7 +63,7 @@ public record RackPlan(String id, Path inventory, String job, LengthUnit unit, M
     public Map<String, Object> toJson() {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("id", id);
-        m.put("inventory", inventory.toString());
+        m.put("inventory", inventory);
         m.put("job", job);
         m.put("units", unit.symbol());
         Map<String, Object> mat = new LinkedHashMap<>();
@@ -119,7 +128,7 @@ public record RackPlan(String id, Path inventory, String job, LengthUnit unit, M
                         number(o, "width"), number(o, "height")));
             }
             JsonNode min = p.path("minOffcut");
-            return new RackPlan(text(p, "id"), Path.of(text(p, "inventory")), text(p, "job"), unit,
+            return new RackPlan(text(p, "id"), text(p, "inventory"), text(p, "job"), unit,
                     MaterialType.parse(text(mat, "type")), mat.has("gauge") ? (int) number(mat, "gauge") : null,
                     number(mat, "thicknessMm"), Instant.parse(text(p, "reservedUntil")), used, offcuts,
                     new MinOffcut(number(min, "width"), number(min, "area")));

@@ -1,20 +1,21 @@
 package dev.sheetwright.cli.rack;
 
-import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.run.JobNest;
 import dev.sheetwright.core.geom.Point2;
 import dev.sheetwright.core.job.Job;
 import dev.sheetwright.core.job.StockRemnant;
 import dev.sheetwright.core.material.MaterialType;
 import dev.sheetwright.core.units.LengthUnit;
+import dev.sheetwright.inventory.NewRemnant;
 import dev.sheetwright.inventory.OutlinePoint;
 import dev.sheetwright.inventory.PlanHold;
 import dev.sheetwright.inventory.Remnant;
+import dev.sheetwright.inventory.RackLocation;
 import dev.sheetwright.inventory.RemnantFilter;
+import dev.sheetwright.inventory.RemnantOutline;
 import dev.sheetwright.inventory.RemnantStore;
 import dev.sheetwright.nest.model.Offcut;
 import dev.sheetwright.nest.model.SheetLayout;
-import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -46,9 +47,9 @@ public final class RackPlanning implements AutoCloseable {
         this.ttl = ttl;
     }
 
-    /** Opens the inventory {@code file}, which must exist, for a new plan of {@code job}. */
-    public static RackPlanning open(Path file, Job job, Duration ttl) {
-        return new RackPlanning(dev.sheetwright.cli.mixin.InventoryOption.openExisting(file), job, ttl);
+    /** Opens the rack at {@code location}, which must exist, for a new plan of {@code job}. */
+    public static RackPlanning open(RackLocation location, Job job, Duration ttl) {
+        return new RackPlanning(RemnantStore.open(location, false), job, ttl);
     }
 
     String planId() {
@@ -70,7 +71,7 @@ public final class RackPlanning implements AutoCloseable {
     public List<StockRemnant> reserve(boolean all, List<String> ids) {
         for (String id : ids) {
             Remnant r = store.get(id).orElseThrow(() -> new IllegalArgumentException("--remnant " + id
-                    + ": no such remnant in " + store.file()));
+                    + ": no such remnant in " + store.location()));
             if (!matchesJob(r)) {
                 throw new IllegalArgumentException("--remnant " + id + ": is " + describe(r) + "; the job is "
                         + jobMaterial() + "; choose a remnant of the job's material");
@@ -112,7 +113,14 @@ public final class RackPlanning implements AutoCloseable {
                 withOffcut.add(s);
             }
         }
-        PlanHold hold = store.hold(planId, job.name(), used, withOffcut.size(), ttl);
+        List<NewRemnant> records = new ArrayList<>();
+        for (SheetLayout s : withOffcut) {
+            Offcut o = nest.offcut(s);
+            RemnantOutline outline = RemnantOutline.rectangle(job.unit().toMm(o.width()), job.unit().toMm(o.height()));
+            records.add(NewRemnant.offcut(job.material().type(), jobGauge(),
+                    jobGauge() == null ? job.material().thicknessMm() : null, outline, "", job.name(), s.index() + 1));
+        }
+        PlanHold hold = store.hold(planId, job.name(), used, records, ttl);
         settled = true;
         List<RackPlan.PlannedOffcut> offcuts = new ArrayList<>();
         for (int i = 0; i < withOffcut.size(); i++) {
@@ -121,13 +129,17 @@ public final class RackPlanning implements AutoCloseable {
             offcuts.add(new RackPlan.PlannedOffcut(hold.offcutIds().get(i), s.index() + 1, o.x(), o.y(), o.width(),
                     o.height()));
         }
-        return new RackPlan(planId, store.file().toAbsolutePath(), job.name(), job.unit(), job.material().type(),
+        return new RackPlan(planId, store.location().toString(), job.name(), job.unit(), job.material().type(),
                 jobGauge(), job.material().thicknessMm(), hold.until(), List.copyOf(used), offcuts, min);
     }
 
     /** Hands back every remnant this plan holds (after a failure); the ids it took stay unused. */
     public void abandon() {
-        store.release(planId);
+        if (settled) {
+            store.releasePlan(planId);
+        } else {
+            store.release(planId);
+        }
     }
 
     @Override

@@ -30,6 +30,15 @@ final class AllowanceOutline {
      * @return vertices of the cut outline, counter-clockwise
      */
     static List<Point2> offset(List<Point2> net, double[] widths, boolean[] notch) {
+        return offset(net, widths, notch, new boolean[net.size()]);
+    }
+
+    /**
+     * As {@link #offset(List, double[], boolean[])}, and at each vertex marked {@code vee} (a bend line meeting a
+     * straight edge that carries an allowance) a V notch with its apex on the net line and a 90 degree included
+     * angle, so flanges turned up on both sides of the bend meet in a mitre (trade-reference §7.5).
+     */
+    static List<Point2> offset(List<Point2> net, double[] widths, boolean[] notch, boolean[] vee) {
         int n = net.size();
         List<Point2> out = new ArrayList<>();
         for (int v = 0; v < n; v++) {
@@ -44,6 +53,10 @@ final class AllowanceOutline {
             double turn = dIn.cross(dOut);
             if (wIn == 0 && wOut == 0) {
                 out.add(p);
+            } else if (vee[v] && wIn == wOut) {
+                out.add(p.plus(nIn.times(wIn)).minus(dIn.times(wIn)));
+                out.add(p);
+                out.add(p.plus(nOut.times(wOut)).plus(dOut.times(wOut)));
             } else if (notch[v] && turn > 0) {
                 out.add(p.plus(nIn.times(wIn)));
                 out.add(p);
@@ -57,6 +70,29 @@ final class AllowanceOutline {
             }
         }
         return out;
+    }
+
+    /**
+     * The cut outline of a rectangular piece: {@link #offset(List, double[], boolean[], boolean[])} over lists
+     * ({@code vee} may be null for none), refused naming the piece when the allowances overlap.
+     */
+    static Contour cut(String fitting, String piece, List<Point2> net, List<Double> widths, List<Boolean> notch,
+            List<Boolean> vee, Tolerance tol) {
+        int n = net.size();
+        double[] w = new double[n];
+        boolean[] nt = new boolean[n];
+        boolean[] v = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            w[i] = widths.get(i);
+            nt[i] = notch.get(i);
+            v[i] = vee != null && vee.get(i);
+        }
+        List<Point2> out = offset(net, w, nt, v);
+        if (!isSimple(net) || !isSimple(out)) {
+            throw new dev.sheetwright.core.fitting.FittingException(fitting, "allowances", "the allowances of piece '"
+                    + piece + "' overlap (or run past a corner or bend); make them narrower");
+        }
+        return contour(out, tol);
     }
 
     /** Outward normal of a counter-clockwise outline's edge running in direction {@code d}. */

@@ -34,6 +34,24 @@ public final class Developers {
         if (spec instanceof TransitionSpec transition) {
             return TransitionDeveloper.develop(transition, ctx);
         }
+        if (spec instanceof dev.sheetwright.core.fitting.RectDuctSpec d) {
+            return RectDuctDeveloper.develop(d, ctx);
+        }
+        if (spec instanceof dev.sheetwright.core.fitting.RectElbowSpec e) {
+            return RectElbowDeveloper.develop(e, ctx);
+        }
+        if (spec instanceof dev.sheetwright.core.fitting.RectOffsetSpec o) {
+            return RectOffsetDeveloper.develop(o, ctx);
+        }
+        if (spec instanceof dev.sheetwright.core.fitting.RectTransitionSpec t) {
+            return RectTransitionDeveloper.develop(t, ctx);
+        }
+        if (spec instanceof dev.sheetwright.core.fitting.ShoeTapSpec s) {
+            return ShoeTapDeveloper.develop(s, ctx);
+        }
+        if (spec instanceof dev.sheetwright.core.fitting.EndCapSpec c) {
+            return EndCapDeveloper.develop(c, ctx);
+        }
         throw new IllegalArgumentException("no development method for fitting type " + spec.type());
     }
 }

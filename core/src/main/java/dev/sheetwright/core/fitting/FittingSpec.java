@@ -2,7 +2,8 @@ package dev.sheetwright.core.fitting;
 
 /** One line of a shop ticket: a fitting of some type, its sizes, quantity and allowances. */
 public sealed interface FittingSpec permits PipeSpec, ReducerSpec, EccentricReducerSpec, ElbowSpec, OffsetSpec,
-        TeeSpec, TransitionSpec {
+        TeeSpec, TransitionSpec, RectDuctSpec, RectElbowSpec, RectOffsetSpec, RectTransitionSpec, ShoeTapSpec,
+        EndCapSpec {
 
     /** Unique id of the fitting within the job. */
     String id();

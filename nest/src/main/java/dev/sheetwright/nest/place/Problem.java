@@ -294,12 +294,14 @@ final class Problem {
     }
 
     private String tooLargeReason(int t, double margin) {
+        // the piece's true extent: the orientation whose bounding box is smallest (a turned box is never smaller
+        // than the piece's own), longer side first as a tie-break
         double bw = Double.POSITIVE_INFINITY;
-        double bh = 0;
+        double bh = Double.POSITIVE_INFINITY;
         for (Orientation o : orientationsByType.get(t)) {
             double w = o.bMaxX - o.bMinX + 2 * margin;
             double h = o.bMaxY - o.bMinY + 2 * margin;
-            if (Math.max(w, h) < Math.max(bw, bh) || (Math.max(w, h) == Math.max(bw, bh) && Math.min(w, h) < Math.min(bw, bh))) {
+            if (w * h < bw * bh || (w * h == bw * bh && Math.max(w, h) < Math.max(bw, bh))) {
                 bw = w;
                 bh = h;
             }

@@ -78,6 +78,18 @@ class NesterTest {
     }
 
     @Test
+    void nest_longPieceTooLargeUnderFreeRotation_reportsItsOwnExtentNotATurnedBox() {
+        // 189 x 60 turned 45 degrees has a box of about 176 x 176; the reason must give the piece's own size
+        Sheet sheet = new Sheet("60x120", 120, 60, OptionalInt.empty(), 1);
+        NestRequest req = new NestRequest(List.of(NestPiece.of("plenum", "wrap", 1, Shapes.rect(0, 0, 189, 60))),
+                List.of(sheet), new NestRules(0, 0, RotationRule.free(), false, 0));
+        NestResult r = nestChecked(req, NestOptions.constructiveOnly());
+        assertEquals(1, r.unplaced().size());
+        assertEquals("larger than every stock (needs 189 x 60 with margin; largest sheet 120 x 60)",
+                r.unplaced().get(0).reason());
+    }
+
+    @Test
     void nest_sheetLimitReached_restUnplaced() {
         Sheet sheet = new Sheet("s", 10, 10, OptionalInt.of(2), 1);
         NestRequest req = new NestRequest(List.of(NestPiece.of("f", "p", 3, Shapes.rect(0, 0, 8, 8))), List.of(sheet), TOUCH);
