@@ -17,9 +17,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * {@code nest --gcode} on the demo job (inch, plasma) and on a metric laser job with lead-outs, read back by outside
- * programs: gcode-toolpath (under node) turns each program into moves, which are compared with the sheet DXF's CUT
- * contours (read by this test's own reader); GDAL's ogrinfo and LibreCAD read the DXFs.
+ * {@code nest --gcode} on the two demo jobs (inch, plasma; round and rectangular) and on a metric laser job with
+ * lead-outs, read back by outside programs: gcode-toolpath (under node) turns each program into moves, which are
+ * compared with the sheet DXF's CUT contours (read by this test's own reader); GDAL's ogrinfo and LibreCAD read the
+ * DXFs.
  */
 class CutProgramTest {
 
@@ -55,8 +56,12 @@ class CutProgramTest {
         Path metricOut = tmp.resolve("metric");
         CommandRun metric = CommandRun.of("nest", metricJob.toString(), "-o", metricOut.toString(), "--gcode",
                 "--show-path", "--iterations", "3", "--seed", "1");
+        Path rooftopOut = tmp.resolve("rooftop");
+        CommandRun rooftop = CommandRun.of("nest", Fixtures.path("demo-rooftop.yaml").toString(), "-o",
+                rooftopOut.toString(), "--gcode", "--iterations", "3", "--seed", "1");
         jobs = List.of(new Job("demo", demoOut, demo, 0.06, MM_PER_IN, 0.0015),
-                new Job("metric", metricOut, metric, 0.2, 1, 0.02));
+                new Job("metric", metricOut, metric, 0.2, 1, 0.02),
+                new Job("rooftop", rooftopOut, rooftop, 0.06, MM_PER_IN, 0.0015));
     }
 
     private static List<Path> sheets(Job job, String ext) throws Exception {
@@ -260,22 +265,29 @@ class CutProgramTest {
 
     @Test
     void sheetDxf_cutContoursInTheProgramOrder_leadsOnTheirOwnLayer() throws Exception {
-        for (Path dxf : allSheets(".dxf")) {
-            SheetDxf d = SheetDxf.read(dxf);
-            List<double[]> contours = cutContours(dxf);
-            // a contour that lies inside another comes before it in the file, as in the program
-            for (int a = 0; a < contours.size(); a++) {
-                for (int b = 0; b < a; b++) {
-                    boolean aInB = inside(contours.get(b), contours.get(a)[0], contours.get(a)[1])
-                            && area(contours.get(a)) < area(contours.get(b));
-                    assertFalse(aInB, dxf + ": contour " + a + " lies inside the earlier contour " + b);
-                }
+        for (Job job : jobs) {
+            boolean showPath = !job.name().equals("rooftop"); // nested without --show-path
+            for (Path dxf : sheets(job, ".dxf")) {
+                checkOrderAndLayers(dxf, showPath);
             }
-            assertTrue(d.polylines().stream().noneMatch(p -> p.layer().equals("LEAD")), "leads are lines");
-            String svg = Files.readString(dxf.resolveSibling(dxf.getFileName().toString().replace(".dxf", ".svg")));
-            assertTrue(svg.contains("data-layer=\"RAPID\"") && svg.contains("data-layer=\"ORDER\""),
-                    "--show-path draws the rapids and the order");
         }
+    }
+
+    private static void checkOrderAndLayers(Path dxf, boolean showPath) throws Exception {
+        SheetDxf d = SheetDxf.read(dxf);
+        List<double[]> contours = cutContours(dxf);
+        // a contour that lies inside another comes before it in the file, as in the program
+        for (int a = 0; a < contours.size(); a++) {
+            for (int b = 0; b < a; b++) {
+                boolean aInB = inside(contours.get(b), contours.get(a)[0], contours.get(a)[1])
+                        && area(contours.get(a)) < area(contours.get(b));
+                assertFalse(aInB, dxf + ": contour " + a + " lies inside the earlier contour " + b);
+            }
+        }
+        assertTrue(d.polylines().stream().noneMatch(p -> p.layer().equals("LEAD")), "leads are lines");
+        String svg = Files.readString(dxf.resolveSibling(dxf.getFileName().toString().replace(".dxf", ".svg")));
+        assertEquals(showPath, svg.contains("data-layer=\"RAPID\"") && svg.contains("data-layer=\"ORDER\""),
+                "--show-path (and only it) draws the rapids and the order");
     }
 
     @Test
