@@ -59,6 +59,7 @@ IFS=',' read -r -a tlist <<< "$times"
 tmp="$(mktemp)"
 trap 'rm -f "$tmp"' EXIT
 
+failed=0
 for f in "$dir"/*.json; do
   name="$(basename "$f" .json)"
   case "$name" in anchors|published-layouts) continue ;; esac
@@ -66,7 +67,17 @@ for f in "$dir"/*.json; do
   row="$name"
   pieces=""
   for t in "${tlist[@]}"; do
-    line="$("${run[@]}" "$f" --time "$t" --seed "$seed")"
+    # a failed run (violations: exit 1; a failure: exit 1 with no line) is recorded in the table, and the
+    # remaining instances still run; the script then exits 1
+    rc=0
+    line="$("${run[@]}" "$f" --time "$t" --seed "$seed")" || rc=$?
+    if [[ "$line" != *'"density"'* ]]; then
+      echo "$name at ${t}s: no result line (exit $rc)" >&2
+      failed=1
+      row="$row|0|exit $rc"
+      continue
+    fi
+    [ "$rc" -eq 0 ] || failed=1
     echo "$line" >&2
     pieces="$(sed -E 's/.*"pieces":([0-9]+).*/\1/' <<< "$line")"
     dens="$(sed -E 's/.*"density":([0-9.]+).*/\1/' <<< "$line")"
@@ -116,3 +127,4 @@ done
   done
 } > "$out"
 echo "wrote $out" >&2
+exit "$failed"

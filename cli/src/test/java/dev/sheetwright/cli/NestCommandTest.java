@@ -35,6 +35,20 @@ class NestCommandTest {
     }
 
     @Test
+    void nest_fixedIterations_sameNestJsonByteForByteWhateverTheThreadCount() throws Exception {
+        Path job = job("j.yaml", SMALL_JOB);
+        Path one = tmp.resolve("one");
+        Path two = tmp.resolve("two");
+        CommandRun a = CommandRun.of("nest", job.toString(), "-o", one.toString(), "--iterations", "12", "--seed", "5",
+                "--threads", "1");
+        CommandRun b = CommandRun.of("nest", job.toString(), "-o", two.toString(), "--iterations", "12", "--seed", "5",
+                "--threads", "2");
+        assertEquals(0, a.exitCode(), a::toString);
+        assertEquals(0, b.exitCode(), b::toString);
+        assertEquals(Files.readString(one.resolve("nest.json")), Files.readString(two.resolve("nest.json")));
+    }
+
+    @Test
     @SuppressWarnings("unchecked")
     void nest_smallJob_everyPieceOnASheet_outsideReaderAgrees() throws Exception {
         Path out = tmp.resolve("out");

@@ -66,7 +66,12 @@ public final class BenchStripCommand implements Callable<Integer> {
         spec.commandLine().getOut().println(new ObjectMapper().writeValueAsString(line));
         spec.commandLine().getOut().flush();
         if (dxf != null) {
-            writeDxf(r, dxf);
+            try {
+                writeDxf(r, dxf);
+            } catch (IllegalArgumentException e) {
+                // the writer refused an outline the engine placed: an internal failure, not bad input
+                throw new IllegalStateException("the DXF writer refused a placed outline (a bug): " + e.getMessage(), e);
+            }
         }
         return violations == 0 ? 0 : 1;
     }
@@ -76,10 +81,18 @@ public final class BenchStripCommand implements Callable<Integer> {
      * CUT, the strip outline (0..length x 0..height) on layer SHEET. Benchmark data have no unit; the file says mm.
      */
     void writeDxf(StripPacker.StripResult result, Path out) {
+        DxfWriter.write(drawing(result), out);
+    }
+
+    /**
+     * The layout as a drawing: the outlines the engine placed (the request's pieces, cleaned by its precision, not
+     * the raw instance rings), moved by their placements.
+     */
+    static Drawing drawing(StripPacker.StripResult result) {
         StripInstance instance = result.instance();
         Map<String, org.locationtech.jts.geom.Polygon> shapes = new LinkedHashMap<>();
-        for (StripInstance.Item item : instance.items()) {
-            shapes.put(StripInstance.pieceName(item.id()), item.polygon());
+        for (dev.sheetwright.nest.model.NestPiece piece : instance.toRequest().pieces()) {
+            shapes.put(piece.piece(), piece.shape());
         }
         List<Shape> drawn = new ArrayList<>();
         double h = instance.stripHeight();
@@ -87,15 +100,19 @@ public final class BenchStripCommand implements Callable<Integer> {
         drawn.add(new Polyline(PatternDrawings.SHEET, List.of(Vertex.of(0, 0), Vertex.of(l, 0), Vertex.of(l, h),
                 Vertex.of(0, h)), true));
         for (Placement p : result.placements()) {
-            org.locationtech.jts.geom.Coordinate[] cs = p.apply(shapes.get(p.piece())).getExteriorRing()
-                    .getCoordinates();
-            List<Vertex> vs = new ArrayList<>();
-            for (int i = 0; i < cs.length - 1; i++) {
-                vs.add(Vertex.of(cs[i].x, cs[i].y));
-            }
-            drawn.add(new Polyline(PatternDrawings.CUT, vs, true));
+            drawn.add(placedOutline(p, shapes.get(p.piece())));
         }
-        DxfWriter.write(Drawing.of("mm", PatternDrawings.LAYERS, drawn), out);
+        return Drawing.of("mm", PatternDrawings.LAYERS, drawn);
+    }
+
+    /** The outer ring of {@code shape} moved by {@code p}, as a closed polyline on layer CUT. */
+    static Polyline placedOutline(Placement p, org.locationtech.jts.geom.Polygon shape) {
+        org.locationtech.jts.geom.Coordinate[] cs = p.apply(shape).getExteriorRing().getCoordinates();
+        List<Vertex> vs = new ArrayList<>();
+        for (int i = 0; i < cs.length - 1; i++) {
+            vs.add(Vertex.of(cs[i].x, cs[i].y));
+        }
+        return new Polyline(PatternDrawings.CUT, vs, true);
     }
 
     private static double round(double v, int digits) {

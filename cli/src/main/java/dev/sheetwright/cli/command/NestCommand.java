@@ -31,6 +31,7 @@ import dev.sheetwright.core.quote.Quote;
 import dev.sheetwright.dxf.Drawing;
 import dev.sheetwright.dxf.DxfWriter;
 import dev.sheetwright.nest.model.NestOptions;
+import dev.sheetwright.nest.model.ProgressListener;
 import dev.sheetwright.nest.model.SheetLayout;
 import dev.sheetwright.nest.model.Unplaced;
 import java.io.PrintWriter;
@@ -137,14 +138,16 @@ public final class NestCommand implements Callable<Integer> {
                 minOffcutArea != null ? minOffcutArea : defaults.area());
         boolean planned = useRemnants || !remnantIds.isEmpty() || commitNow || inventory.given();
         PrintWriter err = spec.commandLine().getErr();
-        Progress progress = Progress.forTerminal(err, seconds);
-        NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
+        search.nestOptions(DEFAULT_SECONDS, ProgressListener.NONE); // bad search options refused before the rack is touched
         long start = System.nanoTime();
         try (RackPlanning rack = planned
                 ? RackPlanning.open(inventory.location(), job, Duration.ofMinutes(reserveMinutes)) : null) {
             List<StockRemnant> fromRack = rack == null ? List.of() : rack.reserve(useRemnants, remnantIds);
-            JobNest nest = JobNest.run(job, jobFile.label(), options, fromRack);
-            progress.done();
+            JobNest nest;
+            try (Progress progress = Progress.forTerminal(err, seconds, Progress.coilOnly(job))) {
+                NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
+                nest = JobNest.run(job, jobFile.label(), options, fromRack);
+            }
             CutPlans cuts = CutPlans.of(nest, file.cutPath());
             RackPlan plan = rack == null ? null : rack.settle(nest, min);
             Quote quote;

@@ -13,7 +13,6 @@ import dev.sheetwright.cli.run.QuoteFiles;
 import dev.sheetwright.core.job.Job;
 import dev.sheetwright.core.quote.Quote;
 import dev.sheetwright.core.quote.ShopSettings;
-import dev.sheetwright.nest.model.NestOptions;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
@@ -57,10 +56,10 @@ public final class QuoteCommand implements Callable<Integer> {
         Job job = jobFile.read();
         ShopSettings settings = shop.settings();
         PrintWriter err = spec.commandLine().getErr();
-        Progress progress = Progress.forTerminal(err, seconds);
-        NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
-        JobNest nest = JobNest.run(job, jobFile.label(), options);
-        progress.done();
+        JobNest nest;
+        try (Progress progress = Progress.forTerminal(err, seconds, Progress.coilOnly(job))) {
+            nest = JobNest.run(job, jobFile.label(), search.nestOptions(DEFAULT_SECONDS, progress));
+        }
         Quote q;
         if (out != null) {
             try (OutputFolder folder = OutputFolder.stage(out)) {

@@ -14,6 +14,7 @@ import org.locationtech.jts.operation.distance.DistanceOp;
 
 import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.NestPiece;
+import dev.sheetwright.nest.model.NestPrecision;
 import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestResult;
 import dev.sheetwright.nest.model.NestRules;
@@ -33,10 +34,10 @@ import dev.sheetwright.nest.model.Unplaced;
  */
 public final class NestChecker {
     /** Default linear tolerance, relative to the largest stock dimension. */
-    public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-7;
+    public static final double DEFAULT_RELATIVE_TOLERANCE = NestPrecision.CHECK_RELATIVE;
     /** Default overlap allowance for gap 0: a fraction of the layout's part area (published layouts are rounded). */
-    public static final double DEFAULT_OVERLAP_FRACTION = 1e-5;
-    private static final double ANGLE_TOLERANCE_DEG = 1e-6;
+    public static final double DEFAULT_OVERLAP_FRACTION = NestPrecision.OVERLAP_FRACTION;
+    private static final double ANGLE_TOLERANCE_DEG = NestPrecision.ANGLE_DEG;
 
     private final NestRequest request;
     private final double linearTolerance;
@@ -63,21 +64,11 @@ public final class NestChecker {
 
     /** Checks with the default tolerances; an empty list means no violation was found. */
     public static List<Violation> check(NestRequest request, NestResult result) {
-        double scale = 1;
-        for (var s : request.stock()) {
-            if (s instanceof Sheet sh) {
-                scale = Math.max(scale, Math.max(sh.width(), sh.height()));
-            } else if (s instanceof Coil c) {
-                scale = Math.max(scale, c.width());
-            } else {
-                Envelope e = ((Remnant) s).outline().getEnvelopeInternal();
-                scale = Math.max(scale, Math.max(e.getWidth(), e.getHeight()));
-            }
-        }
+        double extent = 0;
         for (SheetLayout l : result.sheets()) {
-            scale = Math.max(scale, l.usedLength());
+            extent = Math.max(extent, l.usedLength());
         }
-        return new NestChecker(request, scale * DEFAULT_RELATIVE_TOLERANCE, DEFAULT_OVERLAP_FRACTION).check(result);
+        return new NestChecker(request, request.precision().checkTolerance(extent), DEFAULT_OVERLAP_FRACTION).check(result);
     }
 
     public List<Violation> check(NestResult result) {
@@ -193,35 +184,49 @@ public final class NestChecker {
         double m = request.rules().margin();
         double tol = linearTolerance;
         Envelope e = shape.getEnvelopeInternal();
-        if (layout.stock() instanceof Sheet sh) {
-            if (e.getMinX() < m - tol || e.getMinY() < m - tol || e.getMaxX() > sh.width() - m + tol || e.getMaxY() > sh.height() - m + tol) {
-                out.add(new Violation(m > 0 ? Violation.Kind.MARGIN : Violation.Kind.OUTSIDE_STOCK, where(layout, p)
-                        + " spans x " + fmt(e.getMinX()) + ".." + fmt(e.getMaxX()) + ", y " + fmt(e.getMinY()) + ".." + fmt(e.getMaxY())
-                        + "; must stay within x " + fmt(m) + ".." + fmt(sh.width() - m) + ", y " + fmt(m) + ".." + fmt(sh.height() - m)));
-            }
-        } else if (layout.stock() instanceof Coil c) {
-            if (e.getMinX() < m - tol || e.getMinY() < m - tol || e.getMaxY() > c.width() - m + tol) {
-                out.add(new Violation(m > 0 ? Violation.Kind.MARGIN : Violation.Kind.OUTSIDE_STOCK, where(layout, p)
-                        + " spans x from " + fmt(e.getMinX()) + ", y " + fmt(e.getMinY()) + ".." + fmt(e.getMaxY())
-                        + "; must stay within x >= " + fmt(m) + ", y " + fmt(m) + ".." + fmt(c.width() - m)));
-            }
-            if (e.getMaxX() > layout.usedLength() - m + tol) {
-                out.add(new Violation(Violation.Kind.COIL_LENGTH, where(layout, p) + " reaches x " + fmt(e.getMaxX())
-                        + " beyond the used coil length " + fmt(layout.usedLength()) + " less margin " + fmt(m)));
-            }
-        } else {
-            Remnant r = (Remnant) layout.stock();
-            Geometry grown = r.outline().buffer(tol);
-            if (!grown.covers(shape)) {
-                out.add(new Violation(Violation.Kind.OUTSIDE_STOCK, where(layout, p) + " is not inside remnant " + r.id()));
-            } else if (m > 0) {
-                double d = DistanceOp.distance(shape, r.outline().getBoundary());
-                if (d < m - tol) {
-                    out.add(new Violation(Violation.Kind.MARGIN, where(layout, p) + " is " + fmt(d) + " from the edge of remnant "
-                            + r.id() + ", margin is " + fmt(m)));
-                }
+        String w = where(layout, p);
+        out.addAll(layout.stock().match(
+                sh -> insideSheet(sh, e, m, tol, w),
+                r -> insideRemnant(r, shape, m, tol, w),
+                c -> insideCoil(c, layout.usedLength(), e, m, tol, w)));
+    }
+
+    private static List<Violation> insideSheet(Sheet sh, Envelope e, double m, double tol, String where) {
+        if (e.getMinX() < m - tol || e.getMinY() < m - tol || e.getMaxX() > sh.width() - m + tol || e.getMaxY() > sh.height() - m + tol) {
+            return List.of(new Violation(m > 0 ? Violation.Kind.MARGIN : Violation.Kind.OUTSIDE_STOCK, where
+                    + " spans x " + fmt(e.getMinX()) + ".." + fmt(e.getMaxX()) + ", y " + fmt(e.getMinY()) + ".." + fmt(e.getMaxY())
+                    + "; must stay within x " + fmt(m) + ".." + fmt(sh.width() - m) + ", y " + fmt(m) + ".." + fmt(sh.height() - m)));
+        }
+        return List.of();
+    }
+
+    private static List<Violation> insideCoil(Coil c, double usedLength, Envelope e, double m, double tol, String where) {
+        List<Violation> out = new ArrayList<>();
+        if (e.getMinX() < m - tol || e.getMinY() < m - tol || e.getMaxY() > c.width() - m + tol) {
+            out.add(new Violation(m > 0 ? Violation.Kind.MARGIN : Violation.Kind.OUTSIDE_STOCK, where
+                    + " spans x from " + fmt(e.getMinX()) + ", y " + fmt(e.getMinY()) + ".." + fmt(e.getMaxY())
+                    + "; must stay within x >= " + fmt(m) + ", y " + fmt(m) + ".." + fmt(c.width() - m)));
+        }
+        if (e.getMaxX() > usedLength - m + tol) {
+            out.add(new Violation(Violation.Kind.COIL_LENGTH, where + " reaches x " + fmt(e.getMaxX())
+                    + " beyond the used coil length " + fmt(usedLength) + " less margin " + fmt(m)));
+        }
+        return out;
+    }
+
+    private static List<Violation> insideRemnant(Remnant r, Polygon shape, double m, double tol, String where) {
+        Geometry grown = r.outline().buffer(tol);
+        if (!grown.covers(shape)) {
+            return List.of(new Violation(Violation.Kind.OUTSIDE_STOCK, where + " is not inside remnant " + r.id()));
+        }
+        if (m > 0) {
+            double d = DistanceOp.distance(shape, r.outline().getBoundary());
+            if (d < m - tol) {
+                return List.of(new Violation(Violation.Kind.MARGIN, where + " is " + fmt(d) + " from the edge of remnant "
+                        + r.id() + ", margin is " + fmt(m)));
             }
         }
+        return List.of();
     }
 
     private static String where(SheetLayout layout, Placement p) {

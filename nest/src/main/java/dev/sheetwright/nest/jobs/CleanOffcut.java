@@ -130,6 +130,9 @@ public final class CleanOffcut {
         return true;
     }
 
+    /** Up to this many distinct x edges every x range is tried (quadratic); above, only ranges from a stock end. */
+    static final int ALL_RANGES_UP_TO = 120;
+
     private Optional<Offcut> largest(double clearance, double tolerance) {
         Envelope container = stock.getEnvelopeInternal();
         List<Envelope> taken = new ArrayList<>();
@@ -155,9 +158,14 @@ public final class CleanOffcut {
         }
         Double[] x = xs.toArray(Double[]::new);
         List<Offcut> candidates = new ArrayList<>();
+        // every x range on small layouts; on large ones (thousands of parts) only ranges from one stock end, which
+        // is where an offcut that can be sheared off lies, so the work stays linear in the parts
+        boolean all = x.length <= ALL_RANGES_UP_TO;
         for (int i = 0; i < x.length; i++) {
             for (int j = i + 1; j < x.length; j++) {
-                addFreeBands(x[i], x[j], container, taken, candidates);
+                if (all || i == 0 || j == x.length - 1) {
+                    addFreeBands(x[i], x[j], container, taken, candidates);
+                }
             }
         }
         candidates.sort(Comparator.comparingDouble(Offcut::area).reversed());
@@ -204,14 +212,7 @@ public final class CleanOffcut {
 
     /** The stock as laid out, or null for a coil. */
     private static Polygon stockPolygon(SheetLayout layout) {
-        if (layout.stock() instanceof Sheet s) {
-            return rectangle(0, 0, s.width(), s.height());
-        } else if (layout.stock() instanceof Remnant r) {
-            return r.outline();
-        } else if (layout.stock() instanceof Coil) {
-            return null;
-        }
-        throw new IllegalArgumentException("unknown stock " + layout.stock());
+        return layout.stock().match(s -> rectangle(0, 0, s.width(), s.height()), Remnant::outline, c -> null);
     }
 
     private static Polygon rectangle(double x0, double y0, double x1, double y1) {

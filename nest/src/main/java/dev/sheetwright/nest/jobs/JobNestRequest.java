@@ -5,8 +5,10 @@ import dev.sheetwright.core.job.CuttingRules;
 import dev.sheetwright.core.job.StockRemnant;
 import dev.sheetwright.core.job.StockSheet;
 import dev.sheetwright.core.geom.Point2;
+import dev.sheetwright.core.geom.Tolerance;
 import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.NestPiece;
+import dev.sheetwright.nest.model.NestPrecision;
 import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestRules;
 import dev.sheetwright.nest.model.Remnant;
@@ -37,9 +39,12 @@ public final class JobNestRequest {
 
     /**
      * @param pieces each distinct pattern (moved to the origin) with the number of copies the job needs
+     * @param tolerance the job's one tolerance: arcs are flattened within its chord, and the nest's precision
+     *     ({@link NestPrecision}) is its linear tolerance at the scale of the stock and the parts
      */
     public static JobNestRequest of(Map<Pattern, Integer> pieces, CuttingRules rules,
-            dev.sheetwright.core.job.Stock stock, double chord) {
+            dev.sheetwright.core.job.Stock stock, Tolerance tolerance) {
+        double chord = tolerance.chord();
         List<NestPiece> nestPieces = new ArrayList<>();
         Map<String, Pattern> byKey = new LinkedHashMap<>();
         for (Map.Entry<Pattern, Integer> e : pieces.entrySet()) {
@@ -70,7 +75,8 @@ public final class JobNestRequest {
             case NONE -> RotationRule.none();
         };
         NestRules nestRules = new NestRules(rules.gap(), rules.margin(), rotation, rules.mirror(), chord);
-        return new JobNestRequest(new NestRequest(nestPieces, nestStock, nestRules), byKey);
+        NestPrecision precision = NestPrecision.ofTolerance(NestPrecision.scaleOf(nestPieces, nestStock), tolerance.linear());
+        return new JobNestRequest(new NestRequest(nestPieces, nestStock, nestRules, precision), byKey);
     }
 
     static String key(String fitting, String piece) {

@@ -1,5 +1,7 @@
 package dev.sheetwright.nest.model;
 
+import java.util.function.Function;
+
 /** A strip of unlimited length along +x, y from 0 to width, cut off after the last part. */
 public record Coil(String name, double width, double costPerLength) implements Stock {
     public Coil {
@@ -11,5 +13,12 @@ public record Coil(String name, double width, double costPerLength) implements S
     @Override
     public String label() {
         return name;
+    }
+
+    @Override
+    public <T> T match(Function<? super Sheet, ? extends T> sheet,
+            Function<? super Remnant, ? extends T> remnant,
+            Function<? super Coil, ? extends T> coil) {
+        return coil.apply(this);
     }
 }

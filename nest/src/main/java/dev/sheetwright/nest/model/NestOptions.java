@@ -34,6 +34,20 @@ public record NestOptions(Duration timeLimit, OptionalLong iterations, long seed
         return new NestOptions(Duration.ofDays(1), OptionalLong.of(iterations), seed, threads, ProgressListener.NONE);
     }
 
+    /**
+     * The same options with {@code reserve} taken off a timed run's limit (never below half of it), so that the
+     * caller has that time left after the nest for checking and writing it; a run of fixed steps is unchanged.
+     */
+    public NestOptions reserving(Duration reserve) {
+        Checks.requireNonNull("reserve", reserve);
+        if (iterations.isPresent() || reserve.isNegative() || reserve.isZero()) {
+            return this;
+        }
+        Duration half = timeLimit.dividedBy(2);
+        Duration limit = timeLimit.minus(reserve.compareTo(half) > 0 ? half : reserve);
+        return new NestOptions(limit, iterations, seed, threads, listener);
+    }
+
     /** Only the constructive pass, no improvement search. */
     public static NestOptions constructiveOnly() {
         return steps(0, 0, 1);

@@ -45,7 +45,7 @@ public sealed interface RotationRule {
 
         static List<Double> multiples(double step) {
             List<Double> out = new ArrayList<>();
-            for (int i = 0; i * step < 360 - 1e-9; i++) {
+            for (int i = 0; i * step < 360 - NestPrecision.ANGLE_DEG; i++) {
                 out.add(i * step);
             }
             return List.copyOf(out);

@@ -1,6 +1,7 @@
 package dev.sheetwright.nest.model;
 
 import java.util.OptionalInt;
+import java.util.function.Function;
 
 /** A rectangular sheet size, x from 0 to width, y from 0 to height; count limits how many may be used. */
 public record Sheet(String name, double width, double height, OptionalInt count, double cost) implements Stock {
@@ -23,5 +24,12 @@ public record Sheet(String name, double width, double height, OptionalInt count,
     @Override
     public String label() {
         return name;
+    }
+
+    @Override
+    public <T> T match(Function<? super Sheet, ? extends T> sheet,
+            Function<? super Remnant, ? extends T> remnant,
+            Function<? super Coil, ? extends T> coil) {
+        return sheet.apply(this);
     }
 }

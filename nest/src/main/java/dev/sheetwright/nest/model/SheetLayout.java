@@ -15,7 +15,7 @@ public record SheetLayout(Stock stock, int index, double usedLength, List<Placem
         }
         Checks.requireNonNegative("usedLength", usedLength);
         parts = List.copyOf(Checks.requireNonNull("parts", parts));
-        if (!(utilization >= 0 && utilization <= 1 + 1e-9)) {
+        if (!(utilization >= 0 && utilization <= 1 + NestPrecision.ROUND_OFF)) {
             throw new IllegalArgumentException("utilization must be in 0..1, got " + utilization);
         }
     }
@@ -27,12 +27,6 @@ public record SheetLayout(Stock stock, int index, double usedLength, List<Placem
 
     /** Area of {@code stock} when {@code usedLength} of it is used (only a coil's area depends on it). */
     public static double stockArea(Stock stock, double usedLength) {
-        if (stock instanceof Sheet s) {
-            return s.width() * s.height();
-        }
-        if (stock instanceof Coil c) {
-            return c.width() * usedLength;
-        }
-        return ((Remnant) stock).outline().getArea();
+        return stock.match(s -> s.width() * s.height(), r -> r.outline().getArea(), c -> c.width() * usedLength);
     }
 }

@@ -84,6 +84,12 @@ final class Bin {
      * exact no-fit polygon is not yet known use the (containing) no-fit polygon of their bounding boxes instead, so
      * the position is still feasible but no new no-fit polygon is computed.
      */
+    /** Whether convex piece {@code c} moved by (px, py) reaches into the rectangle (within eps). */
+    private static boolean reaches(ConvexPolygon c, double px, double py, double x0, double y0, double x1, double y1,
+            double eps) {
+        return c.minX + px < x1 + eps && c.maxX + px > x0 - eps && c.minY + py < y1 + eps && c.maxY + py > y0 - eps;
+    }
+
     boolean bottomLeft(Orientation o, Nfp.Cache cache, double eps, Scratch s, Position out, boolean cheap) {
         double ix0 = slot.cx0 - o.bMinX;
         double iy0 = slot.cy0 - o.bMinY;
@@ -102,68 +108,59 @@ final class Bin {
         boolean alongX = slot.alongX;
 
         // gather translated convex pieces that reach into the inner-fit rectangle
-        s.clearPieces();
+        NoFitPieces pieces = s.pieces;
+        pieces.clear();
+        boolean flat = ix1 - ix0 <= eps || iy1 - iy0 <= eps;
         for (int k = 0; k < count; k++) {
             Nfp nfp = cache.get(orient[k], o.id, cheap);
             double px = tx[k];
             double py = ty[k];
-            if (nfp.minX + px >= ix1 - eps || nfp.maxX + px <= ix0 + eps || nfp.minY + py >= iy1 - eps || nfp.maxY + py <= iy0 + eps) {
+            if (!flat && (nfp.minX + px >= ix1 - eps || nfp.maxX + px <= ix0 + eps || nfp.minY + py >= iy1 - eps
+                    || nfp.maxY + py <= iy0 + eps)) {
                 // touches the rectangle at most on its boundary: only matters if the rectangle is degenerate
-                if (!(ix1 - ix0 <= eps || iy1 - iy0 <= eps)) {
-                    continue;
-                }
+                continue;
             }
             boolean union = nfp.outline != nfp.parts;
-            int group = nfp.pockets.length == 0 ? -1 : s.addGroup(nfp.pockets, px, py);
+            int group = nfp.pockets.length == 0 ? -1 : pieces.addGroup(nfp.pockets, px, py);
             for (ConvexPolygon c : nfp.parts) {
-                if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
-                    s.addPiece(c, px, py);
-                    s.distinct[s.np - 1] = union;
-                    s.owner[s.np - 1] = group;
+                if (reaches(c, px, py, ix0, iy0, ix1, iy1, eps)) {
+                    pieces.addTest(c, px, py, union, group);
                 }
             }
             for (ConvexPolygon c : nfp.pockets) {
-                if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
-                    s.addEdgePiece(c, px, py);
+                if (reaches(c, px, py, ix0, iy0, ix1, iy1, eps)) {
+                    pieces.addEdge(c, px, py);
                 }
             }
-            if (union) {
-                for (ConvexPolygon c : nfp.outline) {
-                    if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
-                        s.addEdgePiece(c, px, py);
-                    }
-                }
-            } else {
-                for (ConvexPolygon c : nfp.parts) {
-                    if (c.minX + px < ix1 + eps && c.maxX + px > ix0 - eps && c.minY + py < iy1 + eps && c.maxY + py > iy0 - eps) {
-                        s.addEdgePiece(c, px, py);
-                    }
+            for (ConvexPolygon c : nfp.outline) {
+                if (reaches(c, px, py, ix0, iy0, ix1, iy1, eps)) {
+                    pieces.addEdge(c, px, py);
                 }
             }
         }
         if (slot.obstacles.length > 0) {
             for (ConvexPolygon c : slot.obstacleNfp(o).parts) {
-                if (c.minX < ix1 + eps && c.maxX > ix0 - eps && c.minY < iy1 + eps && c.maxY > iy0 - eps) {
-                    s.addPiece(c, 0, 0);
-                    s.addEdgePiece(c, 0, 0);
+                if (reaches(c, 0, 0, ix0, iy0, ix1, iy1, eps)) {
+                    pieces.addTest(c, 0, 0, false, -1);
+                    pieces.addEdge(c, 0, 0);
                 }
             }
         }
-        s.buildGrid(ix0, iy0, ix1, iy1, eps);
-        s.clearCandidates();
-        s.addCandidate(ix0, iy0);
-        s.addCandidate(ix1, iy0);
-        s.addCandidate(ix0, iy1);
-        s.addCandidate(ix1, iy1);
-        s.collectVerticesAndBorderHits(ix0, iy0, ix1, iy1, eps);
-        s.collectTestVertices(ix0, iy0, ix1, iy1, eps, s.distinct);
-        s.collectIntersections(ix0, iy0, ix1, iy1, eps);
-        int best = s.firstFeasible(alongX, eps);
-        if (best < 0) {
+        s.index(ix0, iy0, ix1, iy1, eps);
+        Candidates cands = s.candidates;
+        cands.add(ix0, iy0);
+        cands.add(ix1, iy0);
+        cands.add(ix0, iy1);
+        cands.add(ix1, iy1);
+        cands.addVerticesAndBorderHits(pieces, ix0, iy0, ix1, iy1, eps);
+        cands.addUnionVertices(pieces, ix0, iy0, ix1, iy1, eps);
+        cands.addCrossings(pieces, s.grid, ix0, iy0, ix1, iy1, eps);
+        Candidates.Spot best = cands.firstFeasible(alongX);
+        if (best == null) {
             return false;
         }
-        out.x = s.cx[best];
-        out.y = s.cy[best];
+        out.x = best.x;
+        out.y = best.y;
         out.orientation = o;
         if (alongX) {
             out.key1 = out.x + o.bMaxX;

@@ -2,6 +2,8 @@ package dev.sheetwright.nest.place;
 
 import java.util.Arrays;
 
+import dev.sheetwright.nest.model.NestPrecision;
+
 /**
  * An immutable convex polygon, counter-clockwise, with outward unit edge normals for fast point tests.
  * Package-private working type of the placer.
@@ -186,7 +188,7 @@ final class ConvexPolygon {
             double fx = other.xs[jb] - other.xs[jb1];
             double fy = other.ys[jb] - other.ys[jb1];
             double cr = ex * fy - ey * fx;
-            double tol = 1e-9 * (Math.abs(ex) + Math.abs(ey)) * (Math.abs(fx) + Math.abs(fy));
+            double tol = NestPrecision.ROUND_OFF * (Math.abs(ex) + Math.abs(ey)) * (Math.abs(fx) + Math.abs(fy));
             if (cr > tol) {
                 i++;
             } else if (cr < -tol) {

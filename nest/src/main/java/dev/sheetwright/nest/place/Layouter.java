@@ -4,9 +4,10 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
-import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.NestPrecision;
 import dev.sheetwright.nest.model.Remnant;
 import dev.sheetwright.nest.model.Sheet;
+import dev.sheetwright.nest.model.SheetLayout;
 
 /**
  * Places copies one after another in a given order (first fit over the opened stock, bottom-left on each, every
@@ -77,18 +78,83 @@ final class Layouter {
     }
 
     /**
-     * As {@link #run(int[], int)} but stops when {@code deadline} (System.nanoTime) passes; returns false then, with
-     * the layout incomplete.
+     * As {@link #run(int[], int)} but stops when {@code deadline} (System.nanoTime) passes; returns how many copies
+     * of the order are then placed or given up (the order's length when it finished, else the layout is incomplete).
      */
-    boolean run(int[] order, int from, long deadline) {
+    int runUntil(int[] order, int from, long deadline) {
         rollback(from);
         for (int i = from; i < order.length; i++) {
             if (System.nanoTime() >= deadline) {
-                return false;
+                return i;
             }
             placeOne(order[i]);
         }
-        return true;
+        return order.length;
+    }
+
+    /**
+     * Places {@code order[from..]} fast, with no no-fit polygon: in columns along the compacting axis by the boxes
+     * of their spacing shapes (boxes that do not overlap keep the gap), beyond everything on the last opened stock,
+     * then on new stock without obstacles. For a run whose time is nearly spent; a copy is given up only when no
+     * stock is left.
+     */
+    void placeOnShelves(int[] order, int from) {
+        rollback(from);
+        Shelves shelves = new Shelves(pb, bins.isEmpty() ? null : bins.get(bins.size() - 1));
+        for (int i = from; i < order.length; i++) {
+            int inst = order[i];
+            evInst[steps] = inst;
+            evNew[steps] = false;
+            evBin[steps] = -1;
+            int t = pb.instType[inst];
+            if (pb.tooLarge[t] == null) {
+                Shelves.Spot spot = shelves.place(t);
+                while (spot == null) {
+                    Slot next = nextPlainSlot(t);
+                    if (next == null) {
+                        break;
+                    }
+                    Bin bin = new Bin(next, pb.types.size());
+                    bins.add(bin);
+                    slotUsed[next.index]++;
+                    evNew[steps] = true;
+                    shelves = new Shelves(pb, bin);
+                    spot = shelves.place(t);
+                    if (spot == null) {
+                        // the new stock takes no copy of this type: close it again
+                        bins.remove(bins.size() - 1);
+                        slotUsed[next.index]--;
+                        evNew[steps] = false;
+                        shelves = new Shelves(pb, null);
+                        skipped.add(next.index);
+                    }
+                }
+                if (spot != null) {
+                    Bin bin = shelves.bin();
+                    bin.add(spot.orientation(), inst, spot.x(), spot.y(), pb.typeArea[t]);
+                    evBin[steps] = bins.indexOf(bin);
+                }
+            }
+            skipped.clear();
+            steps++;
+        }
+    }
+
+    private final java.util.Set<Integer> skipped = new java.util.HashSet<>();
+
+    /** Stock with none left of it used, no obstacles, taking a box of type t; cheapest first; else null. */
+    private Slot nextPlainSlot(int t) {
+        for (Slot slot : pb.slots) {
+            if (slotUsed[slot.index] >= slot.limit || slot.obstacles.length > 0 || skipped.contains(slot.index)) {
+                continue;
+            }
+            for (Orientation o : pb.quickOrientations.get(t)) {
+                if (slot.boxFits(o, pb.precision.eps())) {
+                    return slot;
+                }
+            }
+        }
+        return null;
     }
 
     private List<Orientation> tryList;
@@ -159,10 +225,10 @@ final class Layouter {
     private boolean tryBin(Bin bin, int t) {
         boolean found = false;
         for (Orientation o : tryList) {
-            if (!bin.slot.boxFits(o, pb.eps)) {
+            if (!bin.slot.boxFits(o, pb.precision.eps())) {
                 continue;
             }
-            if (bin.bottomLeft(o, pb.cache, pb.eps, scratch, pos, cheap)) {
+            if (bin.bottomLeft(o, pb.cache, pb.precision.eps(), scratch, pos, cheap)) {
                 if (!found || pos.key1 < best.key1 || (pos.key1 == best.key1 && pos.key2 < best.key2)) {
                     best.x = pos.x;
                     best.y = pos.y;
@@ -201,23 +267,18 @@ final class Layouter {
         for (int b = 0; b < bins.size(); b++) {
             Bin bin = bins.get(b);
             double used = usedExtent(bin);
-            if (bin.slot.stock instanceof Sheet s) {
-                cost += s.cost();
-                area += s.width() * s.height();
-            } else if (bin.slot.stock instanceof Coil c) {
-                double len = Math.max(0, used + margin);
-                cost += c.costPerLength() * len;
-                area += c.width() * len;
-            } else {
-                Remnant r = (Remnant) bin.slot.stock;
-                cost += r.cost();
-                area += r.outline().getArea();
-            }
+            double len = Math.max(0, used + margin);
+            cost += bin.slot.stock.match(Sheet::cost, Remnant::cost, c -> c.costPerLength() * len);
+            area += SheetLayout.stockArea(bin.slot.stock, len);
             if (b == bins.size() - 1) {
                 last = used;
             }
         }
-        return new Score(unplaced, bins.size(), cost, area, last);
+        double parts = 0;
+        for (Bin bin : bins) {
+            parts += bin.partArea();
+        }
+        return new Score(unplaced, bins.size(), cost, area, last, parts);
     }
 
     /** Copy of the current layout. */
@@ -237,7 +298,12 @@ final class Layouter {
     }
 
     /** Lexicographic objective: unplaced copies, stock cost, stock area, then length used on the last stock. */
-    record Score(int unplaced, int bins, double cost, double area, double lastLength) {
+    record Score(int unplaced, int bins, double cost, double area, double lastLength, double partArea) {
+        /** Part area over stock area, 0..1. */
+        double utilization() {
+            return area > 0 ? Math.min(1, partArea / area) : 0;
+        }
+
         boolean betterThan(Score o) {
             return compare(o) < 0;
         }
@@ -262,8 +328,7 @@ final class Layouter {
         }
 
         private static int cmp(double a, double b) {
-            double tol = 1e-12 * Math.max(Math.abs(a), Math.abs(b));
-            return a < b - tol ? -1 : a > b + tol ? 1 : 0;
+            return NestPrecision.compareTotals(a, b);
         }
 
         /** Threshold acceptance: not worse in count terms, and cost and last length within a factor 1 + t. */
@@ -272,9 +337,9 @@ final class Layouter {
                 return unplaced < cur.unplaced;
             }
             if (bins != cur.bins) {
-                return bins < cur.bins && cost <= cur.cost * (1 + t) + 1e-12;
+                return bins < cur.bins && cost <= cur.cost * (1 + t + NestPrecision.RELATIVE_TIE);
             }
-            if (cost > cur.cost * (1 + t) + 1e-12) {
+            if (cost > cur.cost * (1 + t + NestPrecision.RELATIVE_TIE)) {
                 return false;
             }
             return cost < cur.cost || lastLength <= cur.lastLength + t * Math.abs(cur.lastLength);

@@ -15,6 +15,7 @@ import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.Polygon;
 
 import dev.sheetwright.nest.model.Coil;
+import dev.sheetwright.nest.model.NestFailure;
 import dev.sheetwright.nest.model.NestOptions;
 import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestResult;
@@ -32,9 +33,10 @@ import dev.sheetwright.nest.model.Unplaced;
  * the first changed position. Objective, in order: every copy placed, lowest stock cost, least stock area, shortest
  * use of the last piece of stock (which leaves the largest offcut at its far end).
  *
- * <p>With {@link NestOptions#iterations()} given, each thread runs a fixed share of the steps from its own seed and
- * the best result is chosen with ties going to the lowest thread, so the nest depends only on the input, the seed
- * and the step count.
+ * <p>With {@link NestOptions#iterations()} given, {@link #FIXED_SEARCHES} searches each run a fixed share of the
+ * steps from their own seed, on however many threads are given, and the best result is chosen with ties going to
+ * the lowest search, so the nest depends only on the input, the seed and the step count. A timed run runs one
+ * search per thread and ends by the time limit, its constructive pass included.
  */
 public final class Nester {
     /** Threshold of the acceptance rule at the start of the search, relative to the current objective. */
@@ -44,10 +46,10 @@ public final class Nester {
     /** Share of a timed run after which the constructive pass computes no new no-fit polygons. */
     static final double CHEAP_AT = 0.7;
 
-    private final Problem pb;
+    final Problem pb;
     private final NestOptions options;
 
-    private Nester(NestRequest request, NestOptions options) {
+    Nester(NestRequest request, NestOptions options) {
         if (request == null) {
             throw new IllegalArgumentException("request must not be null");
         }
@@ -58,17 +60,48 @@ public final class Nester {
         this.options = options;
     }
 
-    /** Nests the request; never loses a copy (each is placed once or listed as unplaced). */
+    /**
+     * Nests the request; never loses a copy (each is placed once or listed as unplaced).
+     *
+     * @throws IllegalArgumentException if the request or the options are missing
+     * @throws NestFailure if the engine fails inside (a bug, or out of memory): never a bad-input exception
+     */
     public static NestResult nest(NestRequest request, NestOptions options) {
-        return new Nester(request, options).run();
+        Nester n = new Nester(request, options);
+        try {
+            return n.run();
+        } catch (NestFailure e) {
+            throw e;
+        } catch (RuntimeException | OutOfMemoryError e) {
+            throw new NestFailure("the nesting engine failed (a bug; nothing was written): " + describe(e), e);
+        }
     }
 
+    private static String describe(Throwable e) {
+        return e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
+    }
+
+    /**
+     * Searches of a run with a fixed step count: always this many, each from its own seed derived from the run's
+     * seed, executed on however many threads are given, so that the nest does not depend on the thread count.
+     */
+    static final int FIXED_SEARCHES = 4;
+    /**
+     * Share of a timed run after which the constructive pass stops and the rest is placed on shelves: the deadline
+     * itself, since shelves are a last resort (a copy on a shelf lies beyond everything placed before it).
+     */
+    static final double SHELF_AT = 1.0;
+
     private NestResult run() {
-        int threads = options.threads();
+        boolean fixed = options.iterations().isPresent();
+        int searches = fixed ? FIXED_SEARCHES : options.threads();
+        int threads = Math.min(options.threads(), searches);
         long deadline = System.nanoTime() + Math.min(options.timeLimit().toNanos(), Long.MAX_VALUE / 4);
         List<Solution> results = new ArrayList<>();
         if (threads == 1) {
-            results.add(new Worker(0, deadline).call());
+            for (int id = 0; id < searches; id++) {
+                results.add(new Worker(id, searches, deadline).call());
+            }
         } else {
             ExecutorService ex = Executors.newFixedThreadPool(threads, r -> {
                 Thread t = new Thread(r, "nest-worker");
@@ -77,25 +110,23 @@ public final class Nester {
             });
             try {
                 List<Future<Solution>> fs = new ArrayList<>();
-                for (int t = 0; t < threads; t++) {
-                    fs.add(ex.submit(new Worker(t, deadline)::call));
+                for (int id = 0; id < searches; id++) {
+                    fs.add(ex.submit(new Worker(id, searches, deadline)::call));
                 }
                 for (Future<Solution> f : fs) {
                     results.add(f.get());
                 }
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
-                throw new IllegalStateException("nesting was interrupted", e);
+                throw new NestFailure("nesting was interrupted", e);
             } catch (ExecutionException e) {
                 Throwable c = e.getCause();
-                if (c instanceof RuntimeException re) {
-                    throw re;
-                }
-                throw new IllegalStateException(c);
+                throw new NestFailure("the nesting engine failed (a bug; nothing was written): " + describe(c), c);
             } finally {
                 ex.shutdownNow();
             }
         }
+        // ties go to the lowest search: the result depends only on the input, the seed and the step count
         Solution best = results.get(0);
         for (Solution s : results) {
             if (s.score().betterThan(best.score())) {
@@ -105,13 +136,15 @@ public final class Nester {
         return toResult(best);
     }
 
-    /** One search thread. */
+    /** One search: a constructive pass in its own order, then the order search. */
     private final class Worker {
         private final int id;
+        private final int searches;
         private final long deadline;
 
-        Worker(int id, long deadline) {
+        Worker(int id, int searches, long deadline) {
             this.id = id;
+            this.searches = searches;
             this.deadline = deadline;
         }
 
@@ -121,18 +154,25 @@ public final class Nester {
             Layouter lay = new Layouter(pb);
             long tc = System.nanoTime();
             boolean fixed = options.iterations().isPresent();
-            if (!fixed) {
+            if (fixed) {
+                lay.run(order, 0);
+            } else {
                 // the constructive pass gets a share of the budget, then places with fewer orientations, then
-                // without computing new no-fit polygons, so that it ends in time whatever the job
+                // without computing new no-fit polygons, and at last on shelves by bounding boxes, so that it ends
+                // in time whatever the job
                 long b = Math.max(0, deadline - tc);
                 lay.degradeAt(tc + (long) (QUICK_AT * b), tc + (long) (CHEAP_AT * b));
+                int done = lay.runUntil(order, 0, tc + (long) (SHELF_AT * b));
+                if (done < order.length) {
+                    lay.placeOnShelves(order, done);
+                }
+                lay.degradeAt(Long.MAX_VALUE, Long.MAX_VALUE);
             }
-            lay.run(order, 0);
-            lay.degradeAt(Long.MAX_VALUE, Long.MAX_VALUE);
             Layouter.Score cur = lay.score();
             Solution best = lay.snapshot(cur);
+            report(0, cur);
             int n = order.length;
-            long total = fixed ? share(options.iterations().getAsLong(), options.threads(), id) : Long.MAX_VALUE;
+            long total = fixed ? share(options.iterations().getAsLong(), searches, id) : Long.MAX_VALUE;
             long start = System.nanoTime();
             long budget = Math.max(1, deadline - start);
             int valid = n;
@@ -159,7 +199,7 @@ public final class Nester {
                 }
                 if (fixed) {
                     lay.run(cand, Math.min(from, valid));
-                } else if (!lay.run(cand, Math.min(from, valid), deadline)) {
+                } else if (lay.runUntil(cand, Math.min(from, valid), deadline) < n) {
                     break;
                 }
                 valid = n;
@@ -169,7 +209,7 @@ public final class Nester {
                     cur = s;
                     if (s.betterThan(best.score())) {
                         best = lay.snapshot(s);
-                        options.listener().improved(it + 1, s.bins(), s.cost(), s.lastLength());
+                        report(it + 1, s);
                     }
                 } else {
                     valid = from;
@@ -207,6 +247,17 @@ public final class Nester {
                 return lo;
             }
             return -1;
+        }
+    }
+
+    /** Best score told to the listener so far, over all searches. */
+    private Layouter.Score reported;
+
+    /** Tells the listener of a layout better than every one told before (searches report from their threads). */
+    private synchronized void report(long iteration, Layouter.Score s) {
+        if (reported == null || s.betterThan(reported)) {
+            reported = s;
+            options.listener().improved(iteration, s.bins(), s.cost(), s.lastLength(), s.utilization());
         }
     }
 
@@ -259,7 +310,7 @@ public final class Nester {
         return e;
     }
 
-    private NestResult toResult(Solution s) {
+    NestResult toResult(Solution s) {
         List<SheetLayout> sheets = new ArrayList<>();
         double margin = pb.request.rules().margin();
         double gap = pb.request.rules().gap();
@@ -279,16 +330,16 @@ public final class Nester {
                 maxY = Math.max(maxY, plan.y()[k] + o.bMaxY);
             }
             double used = Math.max(0, plan.usedExtent() + margin);
-            Offcut offcut = null;
-            if (plan.slot().stock instanceof Sheet sh) {
-                offcut = bestOffcut(0, 0, sh.width(), sh.height(), maxX + gap, maxY + gap);
-            } else if (plan.slot().stock instanceof Remnant r) {
-                Envelope e = r.outline().getEnvelopeInternal();
-                Offcut o = bestOffcut(e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY(), maxX + gap, maxY + gap);
-                if (o != null && r.outline().covers(rectangle(o))) {
-                    offcut = o;
-                }
-            }
+            double usedX = maxX + gap;
+            double usedY = maxY + gap;
+            Offcut offcut = plan.slot().stock.match(
+                    sh -> bestOffcut(0, 0, sh.width(), sh.height(), usedX, usedY),
+                    r -> {
+                        Envelope e = r.outline().getEnvelopeInternal();
+                        Offcut o = bestOffcut(e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY(), usedX, usedY);
+                        return o != null && r.outline().covers(rectangle(o)) ? o : null;
+                    },
+                    c -> null);
             double stockArea = SheetLayout.stockArea(plan.slot().stock, used);
             double util = stockArea > 0 ? Math.min(1, partArea / stockArea) : 0;
             sheets.add(new SheetLayout(plan.slot().stock, sheets.size(), used, parts, offcut, util));

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.ConcurrentHashMap;
 
+import dev.sheetwright.nest.model.NestPrecision;
+
 /**
  * No-fit polygon of a moving orientation against a fixed one, kept as the list of convex Minkowski sums
  * conv(a + (-b)) over all pairs of convex pieces: the union is the set of reference positions of the moving
@@ -44,8 +46,8 @@ final class Nfp {
     }
 
     /** No-fit polygon of two orientations, with the pockets of their holes. */
-    static Nfp of(Orientation fixed, Orientation moving) {
-        Nfp base = of(fixed.spacing, moving.spacing);
+    static Nfp of(Orientation fixed, Orientation moving, double eps) {
+        Nfp base = of(fixed.spacing, moving.spacing, eps);
         if (fixed.holes.length == 0 && moving.holes.length == 0) {
             return base;
         }
@@ -98,7 +100,8 @@ final class Nfp {
         return m;
     }
 
-    static Nfp of(ConvexPolygon[] fixed, ConvexPolygon[] moving) {
+    /** The convex sums of every pair; {@code eps}: the problem's precision (for the union boundary). */
+    static Nfp of(ConvexPolygon[] fixed, ConvexPolygon[] moving, double eps) {
         List<ConvexPolygon> out = new ArrayList<>();
         for (ConvexPolygon a : fixed) {
             for (ConvexPolygon b : moving) {
@@ -109,7 +112,7 @@ final class Nfp {
             }
         }
         if (out.size() > UNION_ABOVE) {
-            List<ConvexPolygon> merged = unionBoundary(out);
+            List<ConvexPolygon> merged = unionBoundary(out, eps);
             if (merged != null) {
                 return new Nfp(out, merged);
             }
@@ -127,14 +130,11 @@ final class Nfp {
      * (positions there could pass the test against the sums while overlapping); collinear overlapping outer edges
      * are all kept. Null when that leaves no fewer edges than the sums themselves have.
      */
-    static List<ConvexPolygon> unionBoundary(List<ConvexPolygon> parts) {
+    static List<ConvexPolygon> unionBoundary(List<ConvexPolygon> parts, double eps) {
         int rawEdges = 0;
-        double scale = 1;
         for (ConvexPolygon c : parts) {
             rawEdges += c.size();
-            scale = Math.max(scale, Math.max(Math.max(Math.abs(c.minX), Math.abs(c.maxX)), Math.max(Math.abs(c.minY), Math.abs(c.maxY))));
         }
-        double eps = scale * 1e-9;
         List<ConvexPolygon> chains = new ArrayList<>();
         int edges = 0;
         double[] keep = new double[16];
@@ -172,7 +172,7 @@ final class Nfp {
                     for (int e = 0; e < b.size() && lo < hi; e++) {
                         double d0 = b.nx[e] * ax + b.ny[e] * ay - b.c[e] + eps;
                         double dd = b.nx[e] * (bx - ax) + b.ny[e] * (by - ay);
-                        if (b.nx[e] * a.nx[i] + b.ny[e] * a.ny[i] < -1 + 1e-9 && Math.abs(d0 - eps) <= eps
+                        if (b.nx[e] * a.nx[i] + b.ny[e] * a.ny[i] < -1 + NestPrecision.ROUND_OFF && Math.abs(d0 - eps) <= eps
                                 && Math.abs(d0 - eps + dd) <= eps) {
                             // q's edge on the same line, q on the other side: the shared part is inside the union
                             continue;
@@ -187,7 +187,7 @@ final class Nfp {
                             lo = Math.max(lo, -d0 / dd);
                         }
                     }
-                    if (hi - lo > 1e-12) {
+                    if (hi - lo > NestPrecision.PARAMETER_ROUND_OFF) {
                         if (keep.length < 2 * k + 2) {
                             keep = java.util.Arrays.copyOf(keep, keep.length * 2);
                         }
@@ -299,12 +299,15 @@ final class Nfp {
         private final int[] canon;
         private final ConcurrentHashMap<Long, Nfp> boxes = new ConcurrentHashMap<>();
 
-        Cache(List<Orientation> orientations) {
-            this(orientations, null);
+        private final double eps;
+
+        Cache(List<Orientation> orientations, double eps) {
+            this(orientations, null, eps);
         }
 
-        Cache(List<Orientation> orientations, int[] canonicalType) {
+        Cache(List<Orientation> orientations, int[] canonicalType, double eps) {
             this.orientations = orientations;
+            this.eps = eps;
             for (Orientation o : orientations) {
                 byKey.put(key(o.type, o.angleDeg, o.mirrored), o.id);
             }
@@ -342,7 +345,7 @@ final class Nfp {
         }
 
         private static String key(int type, double deg, boolean mirrored) {
-            long milli = Math.round(dev.sheetwright.nest.model.RotationRule.normalize(deg) * 1e6) % 360_000_000L;
+            long milli = Math.round(dev.sheetwright.nest.model.RotationRule.normalize(deg) / NestPrecision.ANGLE_DEG) % Math.round(360 / NestPrecision.ANGLE_DEG);
             return type + ":" + milli + ":" + mirrored;
         }
 
@@ -361,7 +364,7 @@ final class Nfp {
             if (baseF != null && baseM != null) {
                 n = get(baseF, baseM).rotated(f.angleDeg);
             } else {
-                n = of(f, m);
+                n = of(f, m, eps);
             }
             Nfp prev = map.putIfAbsent(k, n);
             return prev != null ? prev : n;

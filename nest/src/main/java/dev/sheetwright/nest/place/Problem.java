@@ -15,6 +15,7 @@ import org.locationtech.jts.simplify.TopologyPreservingSimplifier;
 
 import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.NestPiece;
+import dev.sheetwright.nest.model.NestPrecision;
 import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestRules;
 import dev.sheetwright.nest.model.Remnant;
@@ -52,23 +53,15 @@ final class Problem {
     final List<Slot> slots = new ArrayList<>();
     /** null when the type fits at least one slot; else why not. */
     final String[] tooLarge;
-    final double eps;
+    /** The request's one precision; every tolerance of the placer comes from it. */
+    final NestPrecision precision;
     final Nfp.Cache cache;
 
     Problem(NestRequest request) {
         this.request = request;
         this.types = request.pieces();
         NestRules rules = request.rules();
-        double scale = 1;
-        for (Stock s : request.stock()) {
-            scale = Math.max(scale, stockScale(s));
-        }
-        for (NestPiece p : types) {
-            Envelope e = p.shape().getEnvelopeInternal();
-            scale = Math.max(scale, Math.max(Math.abs(e.getMinX()), Math.abs(e.getMaxX())));
-            scale = Math.max(scale, Math.max(Math.abs(e.getMinY()), Math.abs(e.getMaxY())));
-        }
-        eps = scale * 1e-9;
+        precision = request.precision();
         typeArea = new double[types.size()];
         List<Double> angles = rules.rotation().candidateAngles();
         for (int t = 0; t < types.size(); t++) {
@@ -127,7 +120,7 @@ final class Problem {
             }
             quickOrientations.add(q2.isEmpty() ? placeOrientations.get(t) : q2);
         }
-        cache = new Nfp.Cache(orientations, canonicalType);
+        cache = new Nfp.Cache(orientations, canonicalType, precision.eps());
         tooLarge = new String[types.size()];
         for (int t = 0; t < types.size(); t++) {
             tooLarge[t] = fitsSomewhere(t) ? null : tooLargeReason(t, rules.margin());
@@ -138,12 +131,11 @@ final class Problem {
     private List<Orientation> fitting(List<Orientation> list, double step) {
         List<Orientation> out = new ArrayList<>();
         for (Orientation o : list) {
-            double q = o.angleDeg / step;
-            if (Math.abs(q - Math.rint(q)) > 1e-9) {
+            if (!NestPrecision.multipleOf(o.angleDeg, step)) {
                 continue;
             }
             for (Slot slot : slots) {
-                if (slot.limit > 0 && slot.boxFits(o, eps)) {
+                if (slot.limit > 0 && slot.boxFits(o, precision.eps())) {
                     out.add(o);
                     break;
                 }
@@ -175,16 +167,6 @@ final class Problem {
             return List.of();
         }
         return ConvexDecomposer.decompose(g.getFactory().createMultiPolygon(out.toArray(new Polygon[0])));
-    }
-
-    private static double stockScale(Stock s) {
-        if (s instanceof Sheet sh) {
-            return Math.max(sh.width(), sh.height());
-        } else if (s instanceof Coil c) {
-            return c.width();
-        }
-        Envelope e = ((Remnant) s).outline().getEnvelopeInternal();
-        return Math.max(Math.max(Math.abs(e.getMinX()), Math.abs(e.getMaxX())), Math.max(Math.abs(e.getMinY()), Math.abs(e.getMaxY())));
     }
 
     /**
@@ -220,31 +202,17 @@ final class Problem {
         GeometryFactory gf = new GeometryFactory();
         for (Stock s : request.stock()) {
             int idx = unordered.size();
-            if (s instanceof Sheet sh) {
-                unordered.add(new Slot(idx, s, m, m, sh.width() - m, sh.height() - m, false, sh.width() >= sh.height(),
-                        List.of(), sh.count().orElse(Integer.MAX_VALUE)));
-                rank.add(1 + sh.cost() / (sh.width() * sh.height()));
-            } else if (s instanceof Coil c) {
-                unordered.add(new Slot(idx, s, m, m, Double.POSITIVE_INFINITY, c.width() - m, true, true, List.of(), 1));
-                rank.add(1 + c.costPerLength() / c.width());
-            } else {
-                Remnant r = (Remnant) s;
-                Geometry inner = r.outline();
-                if (m > 0) {
-                    // erode by slightly more than m so the chords of the rounded corners stay m away
-                    double d = m / Math.cos(Math.PI / 32);
-                    inner = r.outline().buffer(-d, 8);
-                }
-                if (inner.isEmpty()) {
-                    continue;
-                }
-                Envelope e = inner.getEnvelopeInternal();
-                Geometry box = gf.toGeometry(e);
-                Geometry outside = box.difference(inner);
-                List<ConvexPolygon> obstacles = outside.isEmpty() ? List.of() : ConvexDecomposer.decompose(polygonal(outside));
-                unordered.add(new Slot(idx, s, e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY(), false,
-                        e.getWidth() >= e.getHeight(), obstacles, 1));
-                rank.add(0.0);
+            Slot slot = s.match(
+                    sh -> new Slot(idx, s, m, m, sh.width() - m, sh.height() - m, false, sh.width() >= sh.height(),
+                            List.of(), sh.count().orElse(Integer.MAX_VALUE), precision.eps()),
+                    r -> remnantSlot(idx, r, m, gf),
+                    c -> new Slot(idx, s, m, m, Double.POSITIVE_INFINITY, c.width() - m, true, true, List.of(), 1,
+                            precision.eps()));
+            if (slot != null) {
+                unordered.add(slot);
+                // remnants first (already paid for), then by cost per unit area
+                rank.add(s.match(sh -> 1 + sh.cost() / (sh.width() * sh.height()), r -> 0.0,
+                        c -> 1 + c.costPerLength() / c.width()));
             }
         }
         List<Integer> ord = new ArrayList<>();
@@ -255,8 +223,26 @@ final class Problem {
         for (int i : ord) {
             Slot u = unordered.get(i);
             slots.add(new Slot(slots.size(), u.stock, u.cx0, u.cy0, u.cx1, u.cy1, u.unlimitedLength, u.alongX,
-                    List.of(u.obstacles), u.limit));
+                    List.of(u.obstacles), u.limit, precision.eps()));
         }
+    }
+
+    /** The slot of a remnant: its outline eroded by the margin, as a box with obstacles; null if nothing is left. */
+    private Slot remnantSlot(int idx, Remnant r, double m, GeometryFactory gf) {
+        Geometry inner = r.outline();
+        if (m > 0) {
+            // erode by slightly more than m so the chords of the rounded corners stay m away
+            double d = m / Math.cos(Math.PI / 32);
+            inner = r.outline().buffer(-d, 8);
+        }
+        if (inner.isEmpty()) {
+            return null;
+        }
+        Envelope e = inner.getEnvelopeInternal();
+        Geometry outside = gf.toGeometry(e).difference(inner);
+        List<ConvexPolygon> obstacles = outside.isEmpty() ? List.of() : ConvexDecomposer.decompose(polygonal(outside));
+        return new Slot(idx, r, e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY(), false, e.getWidth() >= e.getHeight(),
+                obstacles, 1, precision.eps());
     }
 
     private static Geometry polygonal(Geometry g) {
@@ -278,14 +264,14 @@ final class Problem {
                 continue;
             }
             for (Orientation o : orientationsByType.get(t)) {
-                if (!slot.boxFits(o, eps)) {
+                if (!slot.boxFits(o, precision.eps())) {
                     continue;
                 }
                 if (slot.obstacles.length == 0) {
                     return true;
                 }
                 Bin b = new Bin(slot, types.size());
-                if (b.bottomLeft(o, cache, eps, s, pos)) {
+                if (b.bottomLeft(o, cache, precision.eps(), s, pos)) {
                     return true;
                 }
             }
@@ -309,22 +295,14 @@ final class Problem {
         String largest = "none";
         double area = -1;
         for (Stock s : request.stock()) {
-            String d;
-            double a;
-            if (s instanceof Sheet sh) {
-                if (sh.count().isPresent() && sh.count().getAsInt() == 0) {
-                    continue;
-                }
-                d = "sheet " + fmt(sh.width()) + " x " + fmt(sh.height());
-                a = sh.width() * sh.height();
-            } else if (s instanceof Coil c) {
-                d = "coil " + fmt(c.width()) + " wide";
-                a = Double.MAX_VALUE;
-            } else {
-                Envelope e = ((Remnant) s).outline().getEnvelopeInternal();
-                d = "remnant " + fmt(e.getWidth()) + " x " + fmt(e.getHeight());
-                a = ((Remnant) s).outline().getArea();
+            if (s instanceof Sheet sh && sh.count().isPresent() && sh.count().getAsInt() == 0) {
+                continue;
             }
+            String d = s.match(sh -> "sheet " + fmt(sh.width()) + " x " + fmt(sh.height()),
+                    r -> "remnant " + fmt(r.outline().getEnvelopeInternal().getWidth()) + " x "
+                            + fmt(r.outline().getEnvelopeInternal().getHeight()),
+                    c -> "coil " + fmt(c.width()) + " wide");
+            double a = s.match(sh -> sh.width() * sh.height(), r -> r.outline().getArea(), c -> Double.MAX_VALUE);
             if (a > area) {
                 area = a;
                 largest = d;

@@ -21,10 +21,12 @@ final class Slot {
     final boolean alongX;
     final ConvexPolygon[] obstacles;
     final int limit;
+    /** The problem's precision, for the obstacles' no-fit polygons. */
+    private final double eps;
     private final ConcurrentHashMap<Integer, Nfp> obstacleNfps = new ConcurrentHashMap<>();
 
     Slot(int index, Stock stock, double cx0, double cy0, double cx1, double cy1, boolean unlimitedLength,
-         boolean alongX, List<ConvexPolygon> obstacles, int limit) {
+         boolean alongX, List<ConvexPolygon> obstacles, int limit, double eps) {
         this.index = index;
         this.stock = stock;
         this.cx0 = cx0;
@@ -35,6 +37,7 @@ final class Slot {
         this.alongX = alongX;
         this.obstacles = obstacles.toArray(new ConvexPolygon[0]);
         this.limit = limit;
+        this.eps = eps;
     }
 
     /** Whether the body box of {@code o} fits the container box at all. */
@@ -44,6 +47,6 @@ final class Slot {
     }
 
     Nfp obstacleNfp(Orientation o) {
-        return obstacleNfps.computeIfAbsent(o.id, k -> Nfp.of(obstacles, o.body));
+        return obstacleNfps.computeIfAbsent(o.id, k -> Nfp.of(obstacles, o.body, eps));
     }
 }

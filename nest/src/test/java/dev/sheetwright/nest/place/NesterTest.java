@@ -182,4 +182,51 @@ class NesterTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Nester.nest(null, NestOptions.constructiveOnly()));
         assertEquals("request must not be null", e.getMessage());
     }
+
+    @Test
+    void nest_fixedSteps_sameNestWhateverTheThreadCount() {
+        NestRequest req = dev.sheetwright.nest.bench.SheetBenchmark.job(30, 4);
+        NestResult one = nestChecked(req, NestOptions.steps(30, 11, 1));
+        NestResult two = nestChecked(req, NestOptions.steps(30, 11, 2));
+        NestResult three = nestChecked(req, NestOptions.steps(30, 11, 3));
+        assertEquals(one, two);
+        assertEquals(one, three);
+    }
+
+    @Test
+    void placeOnShelves_afterHalfPlacedExactly_restBeyondWithGapKept() {
+        // the first half by no-fit polygons, the rest on shelves after them (what a run out of time does)
+        NestRequest req = dev.sheetwright.nest.bench.SheetBenchmark.job(60, 2);
+        Nester nester = new Nester(req, NestOptions.constructiveOnly());
+        int n = req.totalCopies();
+        int[] order = new int[n];
+        for (int i = 0; i < n; i++) {
+            order[i] = i;
+        }
+        Layouter lay = new Layouter(nester.pb);
+        lay.run(java.util.Arrays.copyOf(order, n / 2), 0);
+        lay.placeOnShelves(order, n / 2);
+        NestResult r = nester.toResult(lay.snapshot(lay.score()));
+        assertEquals(List.of(), NestChecker.check(req, r));
+        assertEquals(n, r.placedCount());
+    }
+
+    @Test
+    void placeOnShelves_coil_everyCopyAfterTheFrontier() {
+        NestRequest req = new NestRequest(List.of(NestPiece.of("x", "tri", 7, Shapes.wkt("POLYGON ((0 0, 7 0, 0 5, 0 0))")),
+                NestPiece.of("x", "sq", 9, Shapes.rect(0, 0, 3, 3))), List.of(new Coil("c", 10, 1)),
+                new NestRules(0.25, 0.5, RotationRule.quarter(), false, 0.01));
+        Nester nester = new Nester(req, NestOptions.constructiveOnly());
+        int[] order = new int[req.totalCopies()];
+        for (int i = 0; i < order.length; i++) {
+            order[i] = i;
+        }
+        Layouter lay = new Layouter(nester.pb);
+        lay.run(java.util.Arrays.copyOf(order, 5), 0);
+        lay.placeOnShelves(order, 5);
+        NestResult r = nester.toResult(lay.snapshot(lay.score()));
+        assertEquals(List.of(), NestChecker.check(req, r));
+        assertEquals(order.length, r.placedCount());
+        assertEquals(1, r.sheets().size());
+    }
 }

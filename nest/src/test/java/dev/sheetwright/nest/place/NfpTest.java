@@ -11,6 +11,8 @@ import org.junit.jupiter.api.Test;
 
 /** The boundary chains of a union of convex sums, used for candidate positions. */
 class NfpTest {
+    /** The placer's precision at these sizes (coordinates up to about 20). */
+    private static final double EPS = 2e-8;
     private static ConvexPolygon square(double x, double y, double s) {
         return ConvexPolygon.of(new double[] {x, x + s, x + s, x}, new double[] {y, y, y + s, y + s});
     }
@@ -35,7 +37,7 @@ class NfpTest {
         for (int i = 0; i < 20; i++) {
             parts.add(square(i * 0.5, 0, 1));
         }
-        List<ConvexPolygon> chains = Nfp.unionBoundary(parts);
+        List<ConvexPolygon> chains = Nfp.unionBoundary(parts, EPS);
         assertNotNull(chains);
         // every kept edge lies on the rectangle's sides (overlapping collinear top and bottom edges are all kept)
         double vertical = 0;
@@ -62,7 +64,7 @@ class NfpTest {
         for (int i = 0; i < 3; i++) {
             parts.add(square(1 + 2 * i, 1, 1));
         }
-        List<ConvexPolygon> chains = Nfp.unionBoundary(parts);
+        List<ConvexPolygon> chains = Nfp.unionBoundary(parts, EPS);
         assertNotNull(chains);
         assertEquals(40, closedLength(chains), 1e-9);
     }
@@ -74,7 +76,7 @@ class NfpTest {
         for (int i = 0; i < 20; i++) {
             parts.add(square(i, 0, 1));
         }
-        List<ConvexPolygon> chains = Nfp.unionBoundary(parts);
+        List<ConvexPolygon> chains = Nfp.unionBoundary(parts, EPS);
         assertNotNull(chains);
         assertEquals(2 * 20 + 2, closedLength(chains), 1e-9);
         for (ConvexPolygon c : chains) {
