@@ -2,7 +2,6 @@ package dev.sheetwright.cli;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -10,7 +9,7 @@ import java.nio.file.SimpleFileVisitor;
 import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
+import java.util.Map;
 import org.junit.jupiter.api.Assertions;
 import org.junit.jupiter.api.Assumptions;
 
@@ -54,34 +53,18 @@ final class HeadlessChromium {
 
     private static Run run(List<String> args) {
         Path profile = null;
-        Path out = null;
-        Path err = null;
         try {
             profile = Files.createTempDirectory("sheetwright-chromium");
-            out = Files.createTempFile("chromium", ".out");
-            err = Files.createTempFile("chromium", ".err");
             List<String> command = new ArrayList<>(List.of(CHROMIUM.toString(), "--headless", "--no-sandbox",
                     "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
                     "--disable-component-update", "--disable-sync", "--user-data-dir=" + profile));
             command.addAll(args);
-            Process p = new ProcessBuilder(command).redirectOutput(out.toFile()).redirectError(err.toFile()).start();
-            p.getOutputStream().close();
-            if (!p.waitFor(TIMEOUT_SECONDS, TimeUnit.SECONDS)) {
-                p.destroyForcibly();
-                p.waitFor(10, TimeUnit.SECONDS);
-                throw new AssertionError("chromium did not finish in " + TIMEOUT_SECONDS + " s: " + command);
-            }
-            return new Run(p.exitValue(), Files.readString(out, StandardCharsets.UTF_8),
-                    Files.readString(err, StandardCharsets.UTF_8));
+            OutsideProgram.Run r = OutsideProgram.run(command, Map.of(), TIMEOUT_SECONDS);
+            return new Run(r.exitCode(), r.stdout(), r.stderr());
         } catch (IOException e) {
             throw new UncheckedIOException(e);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new AssertionError("interrupted while running chromium", e);
         } finally {
             delete(profile);
-            delete(out);
-            delete(err);
         }
     }
 

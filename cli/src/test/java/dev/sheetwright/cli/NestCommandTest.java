@@ -71,7 +71,7 @@ class NestCommandTest {
         for (JsonNode sheet : doc.get("sheets")) {
             Path dxf = out.resolve(sheet.get("file").asText());
             String size = sheet.get("stock").get("width").asDouble() + "x" + sheet.get("stock").get("height").asDouble();
-            DxfCheck.Result r = DxfCheck.run(List.of("--sheet", size, "--margin", "0.5", "--gap", "0.25"), dxf);
+            DxfCheck.Result r = DxfCheck.run(List.of("--cut-layers", "CUT", "--sheet", size, "--margin", "0.5", "--gap", "0.25"), dxf);
             assertEquals(0, r.exitCode(), () -> r.summary() + r.stderr());
             Map<String, Object> f = r.file(0);
             assertEquals(sheet.get("parts").size(), f.get("outer_contours"), "one outer contour per placed part");

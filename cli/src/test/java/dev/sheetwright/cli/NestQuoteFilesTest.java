@@ -108,14 +108,20 @@ class NestQuoteFilesTest {
         double cut = 0;
         int contours = 0;
         for (JsonNode s : nest.get("sheets")) {
-            DxfCheck.Result r = DxfCheck.run(List.of(), out.resolve(s.get("file").asText()));
+            DxfCheck.Result r = DxfCheck.run(List.of("--cut-layers", "CUT"), out.resolve(s.get("file").asText()));
             assertEquals(0, r.exitCode(), () -> r.summary() + r.stderr());
             Map<String, Object> f = r.file(0);
             cut += ((Number) f.get("cut_length")).doubleValue();
             contours += ((Number) f.get("outer_contours")).intValue() + ((Number) f.get("holes")).intValue();
         }
-        assertEquals(cut, quote.get("totals").get("cutLength").asDouble(), 1e-3);
-        assertEquals(contours, quote.get("totals").get("pierces").asInt());
+        // the quote reads the torch path: each loop is half a kerf into scrap, so an outline's loop is longer than
+        // its contour by at most pi x kerf (a half-kerf circle's worth of outside corners) and a hole's is shorter
+        JsonNode t = quote.get("totals");
+        double kerf = 0.06; // the job's cutting.kerf
+        assertEquals(cut, t.get("contourLength").asDouble(), Math.PI * kerf * contours);
+        assertEquals(t.get("contourLength").asDouble() + t.get("leadInLength").asDouble(),
+                t.get("cutLength").asDouble(), 1e-9);
+        assertEquals(contours, t.get("pierces").asInt());
     }
 
     @Test

@@ -36,7 +36,8 @@ class QuoteCommandTest {
     @Test
     void quote_jobPricedByWeightWithMachineRate_printsTableAndWritesFiles() throws Exception {
         // $8.75 per 100 lb on 24 ga: $0.10115 per ft2 [S:LONG p.102, problem 25A] (computed); 40 ft2 -> $4.046
-        Path job = job("24", "quote: {currency: usd, price-per-lb: 0.0875, machine-rate: 90, lead-in: 1/4}");
+        Path job = job("24", "quote: {currency: usd, price-per-lb: 0.0875, machine-rate: 90}\n"
+                + "cutting: {lead-in: 3/16, lead-out: 0}");
         Path out = tmp.resolve("q");
 
         CommandRun run = CommandRun.of("quote", job.toString(), "-o", out.toString(), "--time", "0");
@@ -50,7 +51,7 @@ class QuoteCommandTest {
         assertEquals(t.get("cutMinutes").asDouble() / 60 * 90, t.get("machineCost").asDouble(), EPS);
         assertEquals(t.get("materialCost").asDouble() + t.get("machineCost").asDouble(),
                 t.get("totalCost").asDouble(), EPS);
-        assertEquals(t.get("pierces").asInt() * 0.25, t.get("leadInLength").asDouble(), EPS);
+        assertEquals(t.get("pierces").asInt() * 0.1875, t.get("leadInLength").asDouble(), EPS);
         assertEquals(t.get("contourLength").asDouble() + t.get("leadInLength").asDouble(),
                 t.get("cutLength").asDouble(), EPS);
         assertTrue(run.out().contains("by weight (job)"), run::toString);

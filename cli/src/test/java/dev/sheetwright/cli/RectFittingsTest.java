@@ -99,7 +99,8 @@ class RectFittingsTest {
             Path dxf = out.resolve(sheet.get("file").asText());
             String size = sheet.get("stock").get("width").asDouble() + "x"
                     + sheet.get("stock").get("height").asDouble();
-            DxfCheck.Result r = DxfCheck.run(List.of("--sheet", size, "--margin", "0.375", "--gap", "0.25"), dxf);
+            DxfCheck.Result r = DxfCheck.run(List.of("--cut-layers", "CUT", "--sheet", size, "--margin", "0.375",
+                    "--gap", "0.25"), dxf);
             assertEquals(0, r.exitCode(), () -> r.summary() + r.stderr());
             assertEquals(sheet.get("parts").size(), r.file(0).get("outer_contours"));
             assertEquals(0, ((Map<String, Object>) r.file(0).get("audit")).get("errors"));

@@ -9,7 +9,7 @@ import dev.sheetwright.cli.mixin.ShopOption;
 import dev.sheetwright.cli.output.JsonFiles;
 import dev.sheetwright.cli.output.NestJson;
 import dev.sheetwright.cli.output.OutputFolder;
-import dev.sheetwright.cli.output.PatternDrawings;
+import dev.sheetwright.cli.output.TextFiles;
 import dev.sheetwright.cli.output.PatternsJson;
 import dev.sheetwright.cli.output.QuoteText;
 import dev.sheetwright.cli.output.SheetDrawings;
@@ -18,9 +18,13 @@ import dev.sheetwright.cli.rack.PlanReport;
 import dev.sheetwright.cli.rack.RackCommit;
 import dev.sheetwright.cli.rack.RackPlan;
 import dev.sheetwright.cli.rack.RackPlanning;
+import dev.sheetwright.cli.job.JobReader;
+import dev.sheetwright.cli.run.CutPlans;
 import dev.sheetwright.cli.run.JobNest;
 import dev.sheetwright.cli.run.Progress;
 import dev.sheetwright.cli.run.QuoteFiles;
+import dev.sheetwright.cli.run.SheetPrograms;
+import dev.sheetwright.core.cutpath.MachineSettings;
 import dev.sheetwright.core.job.Job;
 import dev.sheetwright.core.job.StockRemnant;
 import dev.sheetwright.core.quote.Quote;
@@ -103,6 +107,16 @@ public final class NestCommand implements Callable<Integer> {
     @Mixin
     dev.sheetwright.cli.mixin.ShopOption shop;
 
+    @Option(names = "--gcode",
+            description = "also write sheets/sheet-NNN.nc: one RS-274 program per sheet (dialect from the shop"
+                    + " file's machine: section)")
+    boolean gcode;
+
+    @Option(names = "--show-path",
+            description = "draw the cut order (numbers at the pierces) and the rapids (dashed) on the SVG previews"
+                    + " and the report's sheet pictures")
+    boolean showPath;
+
     @Override
     public Integer call() {
         double seconds = search.seconds(DEFAULT_SECONDS);
@@ -116,7 +130,9 @@ public final class NestCommand implements Callable<Integer> {
                     + location);
         }
         OutputFolder.check(out); // before the long nest, not after it
-        Job job = jobFile.read();
+        JobReader.JobFile file = JobReader.readFull(jobFile.path());
+        Job job = file.job();
+        MachineSettings machine = shop.machine();
         MinOffcut defaults = MinOffcut.defaults(job.unit());
         MinOffcut min = new MinOffcut(minOffcutWidth != null ? minOffcutWidth : defaults.width(),
                 minOffcutArea != null ? minOffcutArea : defaults.area());
@@ -132,17 +148,18 @@ public final class NestCommand implements Callable<Integer> {
                 NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
                 nest = JobNest.run(job, jobFile.label(), options, fromRack);
             }
+            CutPlans cuts = CutPlans.of(nest, file.cutPath());
             RackPlan plan = rack == null ? null : rack.settle(nest, min);
             Quote quote;
             try {
-                quote = write(job, nest, plan);
+                quote = write(file, nest, cuts, plan, machine);
             } catch (RuntimeException e) {
                 if (rack != null) {
                     rack.abandon();
                 }
                 throw e;
             }
-            print(nest, NestJson.document(nest, plan), (System.nanoTime() - start) / 1e9);
+            print(nest, cuts, NestJson.document(nest, plan), (System.nanoTime() - start) / 1e9);
             QuoteText.summary(quote).forEach(spec.commandLine().getOut()::println);
             if (plan != null) {
                 PlanReport.planned(spec.commandLine().getOut(), plan, out);
@@ -155,26 +172,35 @@ public final class NestCommand implements Callable<Integer> {
         }
     }
 
-    private Quote write(Job job, JobNest nest, RackPlan plan) {
+    private Quote write(JobReader.JobFile file, JobNest nest, CutPlans cuts, RackPlan plan, MachineSettings machine) {
+        Job job = file.job();
         Map<String, Object> doc = NestJson.document(nest, plan);
+        SheetPrograms programs = gcode ? SheetPrograms.of(nest, cuts, shop.settings(), machine) : null;
         try (OutputFolder folder = OutputFolder.stage(out)) {
             for (SheetLayout s : nest.result().sheets()) {
                 RackPlan.PlannedOffcut id = plan == null ? null : plan.offcutOfSheet(s.index() + 1);
-                Drawing d = SheetDrawings.drawing(s, nest.plan(), job.name(), job.unit(), nest.offcut(s),
-                        id == null ? null : id.id());
+                String offcutId = id == null ? null : id.id();
+                double chord = job.tolerance().chord();
+                Drawing d = SheetDrawings.drawing(s, nest.plan(), job.name(), job.unit(), nest.offcut(s), offcutId,
+                        cuts.of(s), chord, false);
                 DxfWriter.write(d, folder.file(NestJson.sheetFile(s) + ".dxf"));
-                PatternDrawings.svgWriter(true).write(d, folder.file(NestJson.sheetFile(s) + ".svg"));
+                Drawing preview = showPath ? SheetDrawings.drawing(s, nest.plan(), job.name(), job.unit(),
+                        nest.offcut(s), offcutId, cuts.of(s), chord, true) : d;
+                SheetDrawings.svgWriter().write(preview, folder.file(NestJson.sheetFile(s) + ".svg"));
+                if (programs != null) {
+                    TextFiles.write(programs.lines(s), folder.file(NestJson.sheetFile(s) + ".nc"));
+                }
             }
             JsonFiles.write(doc, folder.file("nest.json"));
             JsonFiles.write(PatternsJson.document(job, nest.developments()), folder.file("patterns.json"));
-            Quote quote = QuoteFiles.write(folder, nest, jobFile.path(), shop.settings());
+            Quote quote = QuoteFiles.write(folder, nest, cuts, file.quote(), shop.settings(), showPath);
             folder.commit();
             return quote;
         }
     }
 
     @SuppressWarnings("unchecked")
-    private void print(JobNest nest, Map<String, Object> doc, double secs) {
+    private void print(JobNest nest, CutPlans cuts, Map<String, Object> doc, double secs) {
         PrintWriter w = spec.commandLine().getOut();
         Map<String, Object> totals = (Map<String, Object>) doc.get("totals");
         String u = nest.job().unit().symbol();
@@ -190,8 +216,13 @@ public final class NestCommand implements Callable<Integer> {
         for (Unplaced up : nest.result().unplaced()) {
             w.printf(Locale.ROOT, "  NOT PLACED %s %s #%d: %s%n", up.fitting(), up.piece(), up.copy() + 1, up.reason());
         }
-        w.printf(Locale.ROOT, "Wrote %s (sheets/*.dxf, sheets/*.svg, nest.json, patterns.json)%n%s%n", out,
-                Cautions.SHORT);
+        for (SheetLayout s : nest.result().sheets()) {
+            for (String note : cuts.of(s).notes()) {
+                w.printf(Locale.ROOT, "  sheet %3d  lead: %s%n", s.index() + 1, note);
+            }
+        }
+        w.printf(Locale.ROOT, "Wrote %s (sheets/*.dxf, sheets/*.svg%s, nest.json, patterns.json)%n%s%n", out,
+                gcode ? ", sheets/*.nc" : "", Cautions.SHORT);
         w.flush();
     }
 }

@@ -1,5 +1,7 @@
 package dev.sheetwright.cli.job;
 
+import dev.sheetwright.core.cutpath.CutPathSettings;
+import dev.sheetwright.core.cutpath.KerfCompensation;
 import dev.sheetwright.core.cutting.CuttingProcess;
 import dev.sheetwright.core.job.CuttingRules;
 import dev.sheetwright.core.job.RotationMode;
@@ -11,11 +13,13 @@ import java.util.Set;
 
 /**
  * The job file's {@code cutting:} section, the one place its keys are read: process, kerf, gap, margin, rotation
- * and mirror. Missing values are the shop defaults of the process ({@link ShopDefaults}).
+ * and mirror ({@link #read}), lead-in, lead-out and kerf-compensation ({@link #cutPath}). Missing values are the
+ * shop defaults of the process ({@link ShopDefaults}).
  */
 final class CuttingReader {
 
-    static final Set<String> KEYS = Set.of("process", "kerf", "gap", "margin", "rotation", "mirror");
+    static final Set<String> KEYS = Set.of("process", "kerf", "gap", "margin", "rotation", "mirror", "lead-in",
+            "lead-out", "kerf-compensation");
 
     private CuttingReader() {
     }
@@ -65,5 +69,44 @@ final class CuttingReader {
             }
         }
         return new CuttingRules(process, kerf, gap, margin, rotation, step, c.bool("mirror", false));
+    }
+
+    /**
+     * How contours are entered, left and compensated. A lead longer than the gap less the kerf could reach the
+     * next part and is refused.
+     */
+    static CutPathSettings cutPath(Fields c, CuttingRules rules, LengthUnit unit) {
+        double longest = CutPathSettings.longestLeadIn(rules.gap(), rules.kerf());
+        double leadIn = ShopDefaults.leadIn(rules.process(), rules.gap(), rules.kerf(), unit);
+        KerfCompensation compensation = KerfCompensation.PATH;
+        if (c != null) {
+            leadIn = c.notNegative("lead-in", leadIn);
+            if (leadIn > longest) {
+                throw c.error("lead-in", "must be at most the gap less the kerf (" + format(longest) + " "
+                        + unit.symbol() + ") so a lead never reaches the next part, got " + format(leadIn));
+            }
+        }
+        double leadOut = ShopDefaults.leadOut(rules.process(), leadIn, unit);
+        if (c != null) {
+            leadOut = c.notNegative("lead-out", leadOut);
+            if (leadOut > longest) {
+                throw c.error("lead-out", "must be at most the gap less the kerf (" + format(longest) + " "
+                        + unit.symbol() + "), got " + format(leadOut));
+            }
+            if (c.has("kerf-compensation")) {
+                try {
+                    compensation = KerfCompensation.parse(c.string("kerf-compensation"));
+                } catch (JobFileException e) {
+                    throw e;
+                } catch (IllegalArgumentException e) {
+                    throw c.error("kerf-compensation", e.getMessage());
+                }
+            }
+        }
+        return new CutPathSettings(rules.kerf(), leadIn, leadOut, compensation);
+    }
+
+    private static String format(double v) {
+        return String.format(Locale.ROOT, "%.4g", v);
     }
 }

@@ -1,5 +1,6 @@
 package dev.sheetwright.cli.job;
 
+import dev.sheetwright.core.cutpath.CutPathSettings;
 import dev.sheetwright.core.fitting.AllowanceTable;
 import dev.sheetwright.core.fitting.Allowances;
 import dev.sheetwright.core.fitting.DimensionFace;
@@ -45,8 +46,8 @@ public final class JobReader {
             new ElbowReader(), new BranchReader(), new TransitionReader(), new RectReader());
     private static final Map<String, FittingReader> BY_TYPE = byType(FAMILIES);
 
-    /** A job file read whole: the job and its {@code quote:} section. */
-    public record JobFile(Job job, QuoteTerms quote) {
+    /** A job file read whole: the job, how its contours are cut (from {@code cutting:}) and its {@code quote:} section. */
+    public record JobFile(Job job, CutPathSettings cutPath, QuoteTerms quote) {
     }
 
     private JobReader() {
@@ -131,7 +132,8 @@ public final class JobReader {
         Stock stock = StockReader.read(top.has("stock") ? top.map("stock") : null, unit);
         refuseMarginWithoutRoom(cutting, stock, file, unit, top.has("cutting") && top.map("cutting").has("margin"));
         QuoteTerms quote = top.has("quote") ? QuoteSectionReader.read(top.map("quote"), unit) : QuoteTerms.NONE;
-        return new JobFile(new Job(name, unit, material, face, fittings, cutting, stock, tolerance), quote);
+        CutPathSettings cutPath = CuttingReader.cutPath(top.has("cutting") ? sized.map("cutting") : null, cutting, unit);
+        return new JobFile(new Job(name, unit, material, face, fittings, cutting, stock, tolerance), cutPath, quote);
     }
 
     /**

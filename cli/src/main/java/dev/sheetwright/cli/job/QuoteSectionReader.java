@@ -10,14 +10,21 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 
-/** The job file's {@code quote:} section: currency, one price per weight, machine rate per hour, lead-in length. */
+/**
+ * The job file's {@code quote:} section: currency, one price per weight, machine rate per hour. The lead-in moved to
+ * {@code cutting:} (the cut program and the quote use the same one); a {@code quote: {lead-in}} is refused saying so.
+ */
 final class QuoteSectionReader {
 
     private QuoteSectionReader() {
     }
 
     static QuoteTerms read(Fields q, LengthUnit unit) {
-        q.allowOnly(Set.of("currency", "price-per-lb", "price-per-kg", "machine-rate", "lead-in"));
+        if (q.has("lead-in")) {
+            throw q.error("lead-in", "has moved to the cutting: section (cutting: {lead-in: ..., lead-out: ...}),"
+                    + " where the cut program and the quote both read it");
+        }
+        q.allowOnly(Set.of("currency", "price-per-lb", "price-per-kg", "machine-rate"));
         Optional<String> currency = Optional.empty();
         if (q.has("currency")) {
             String c = q.string("currency");
@@ -37,12 +44,6 @@ final class QuoteSectionReader {
         }
         OptionalDouble rate = q.has("machine-rate") ? OptionalDouble.of(q.notNegative("machine-rate", 0))
                 : OptionalDouble.empty();
-        double leadIn = q.notNegative("lead-in", 0);
-        // a sanity bound only: lead-ins are about 1-6 mm (common practice, trade-reference §9.4)
-        if (leadIn > unit.fromMm(25)) {
-            throw q.error("lead-in", "must be at most " + unit.fromMm(25) + " " + unit.symbol() + " (25 mm), got "
-                    + leadIn);
-        }
-        return new QuoteTerms(currency, price, rate, leadIn);
+        return new QuoteTerms(currency, price, rate);
     }
 }

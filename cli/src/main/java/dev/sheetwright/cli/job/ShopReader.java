@@ -1,5 +1,6 @@
 package dev.sheetwright.cli.job;
 
+import dev.sheetwright.core.cutpath.MachineSettings;
 import dev.sheetwright.core.cutting.CutChart;
 import dev.sheetwright.core.cutting.CutChartRow;
 import dev.sheetwright.core.cutting.CuttingProcess;
@@ -22,13 +23,14 @@ import java.util.Set;
 
 /**
  * Reads a shop settings file ({@code --shop FILE}, YAML): the machine's own cut chart rows, rapid speeds, sheet
- * handling minutes, machine rate, material price and currency. Lengths and speeds are in the file's {@code units}
+ * handling minutes, machine rate, material price and currency, and the table's G-code dialect ({@code machine:},
+ * {@link MachineReader}). Lengths and speeds are in the file's {@code units}
  * (in: inches and in/min; mm: millimetres and mm/min). Unknown keys are refused; every error names the file and field.
  */
 public final class ShopReader {
 
     private static final Set<String> TOP = Set.of("units", "currency", "price-per-lb", "price-per-kg",
-            "machine-rate", "load-minutes", "rapid-speed", "cut-chart");
+            "machine-rate", "load-minutes", "rapid-speed", "cut-chart", "machine");
     private static final Set<String> ROW = Set.of("process", "material", "thickness", "gauge", "speed", "pierce",
             "height-sense");
 
@@ -41,6 +43,13 @@ public final class ShopReader {
 
     public static ShopSettings parse(String text, String file) {
         return fromDocument(YamlDocument.load(text, file), file);
+    }
+
+    /** The file's {@code machine:} section (the table's G-code dialect), or the built-in dialect without one. */
+    public static MachineSettings machine(Path path) {
+        Fields top = Fields.root(path.toString(), YamlDocument.read(path, "shop file"));
+        return top.has("machine") ? MachineReader.read(top.map("machine"), LengthUnit.parse(top.string("units")))
+                : MachineSettings.DEFAULT;
     }
 
     private static ShopSettings fromDocument(Object doc, String file) {
@@ -102,6 +111,9 @@ public final class ShopReader {
             } catch (IllegalArgumentException e) {
                 throw top.error("cut-chart", e.getMessage());
             }
+        }
+        if (top.has("machine")) {
+            MachineReader.read(top.map("machine"), unit); // refused here, with the rest of the file
         }
         return new ShopSettings(rows, rapid, load, rate, price, currency);
     }

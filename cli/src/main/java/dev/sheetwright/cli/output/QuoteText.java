@@ -70,7 +70,7 @@ public final class QuoteText {
         out.add(String.format(Locale.ROOT, "  parts      %s %s (%s %s), scrap %s %s, utilization %.1f %%",
                 num(t.partWeight(), 2), w, num(t.partArea(), 2), q.areaUnit(), num(t.scrapWeight(), 2), w,
                 100 * t.utilization()));
-        out.add(String.format(Locale.ROOT, "  cutting    %s %s of cut (%s of contours + %s of lead-ins), %d pierces,"
+        out.add(String.format(Locale.ROOT, "  cutting    %s %s of cut (%s around contours + %s of leads), %d pierces,"
                 + " %s %s of rapids", num(t.cutLength(), 1), u, num(t.contourLength(), 1), num(t.leadInLength(), 1),
                 t.pierces(), num(t.rapidLength(), 1), u));
         out.add("  cut time   " + minutes(t.cutMinutes()) + " = " + timeTerms(q));

@@ -1,10 +1,12 @@
 package dev.sheetwright.cli.output;
 
+import dev.sheetwright.core.cutpath.SheetCutPlan;
 import dev.sheetwright.core.geom.Box2;
 import dev.sheetwright.core.geom.Pattern;
 import dev.sheetwright.core.geom.Point2;
 import dev.sheetwright.core.units.LengthUnit;
 import dev.sheetwright.dxf.Drawing;
+import dev.sheetwright.dxf.Layer;
 import dev.sheetwright.dxf.Shape;
 import dev.sheetwright.dxf.Text;
 import dev.sheetwright.nest.model.Placement;
@@ -64,8 +66,11 @@ public final class ReportDrawings {
         return Math.max(b.width(), b.height());
     }
 
-    /** The picture of one sheet; {@code placed} are the layout's parts already moved to sheet coordinates. */
-    public static Drawing sheet(SheetLayout sheet, List<Pattern> placed, LengthUnit unit) {
+    /**
+     * The picture of one sheet; {@code placed} are the layout's parts already moved to sheet coordinates. With a
+     * cut plan ({@code path} not null) the pierces are numbered in cutting order and the rapids drawn dashed.
+     */
+    public static Drawing sheet(SheetLayout sheet, List<Pattern> placed, LengthUnit unit, SheetCutPlan path) {
         List<Shape> shapes = new ArrayList<>();
         shapes.add(SheetDrawings.stockOutline(sheet));
         double longSide = longSide(sheet);
@@ -79,6 +84,11 @@ public final class ReportDrawings {
             double width = CHAR_WIDTH_PER_CAP * text.length() * h;
             shapes.add(new Text(PatternDrawings.LABEL, a.x() - width / 2, a.y() - h / 2, h, text));
         }
-        return Drawing.of(unit.symbol(), PatternDrawings.LAYERS, shapes);
+        List<Layer> layers = new ArrayList<>(PatternDrawings.LAYERS);
+        if (path != null) {
+            SheetDrawings.addPath(shapes, path, unit, longSide);
+            layers.addAll(SheetDrawings.PREVIEW_LAYERS);
+        }
+        return Drawing.of(unit.symbol(), layers, shapes);
     }
 }

@@ -74,7 +74,7 @@ public final class ReportHtml {
         for (ShopReport.SheetPage p : r.sheets()) {
             h.append("<section class=\"sheet\" id=\"sheet-").append(p.number()).append("\">\n<h2>")
                     .append(esc(p.heading())).append("</h2>\n<figure>\n")
-                    .append(inlineSvg(PatternDrawings.svgWriter(true).toSvg(p.drawing())))
+                    .append(inlineSvg(SheetDrawings.svgWriter().toSvg(p.drawing())))
                     .append("</figure>\n<p class=\"labels\">Key: ").append(esc(String.join("; ", p.parts())))
                     .append("</p>\n</section>\n");
         }

@@ -254,6 +254,9 @@ public final class ReportPdf {
         stroke(d, PatternDrawings.SHEET, 0.6f, 0.55f, m);
         stroke(d, PatternDrawings.MARK, 0.35f, 0.45f, m);
         stroke(d, PatternDrawings.CUT, 0.7f, 0f, m);
+        out.setLineDashPattern(new float[] {2f, 2f}, 0);
+        stroke(d, SheetDrawings.RAPID, 0.3f, 0.4f, m);
+        out.setLineDashPattern(new float[] {}, 0);
         out.setNonStrokingColor(0.05f, 0.35f, 0.1f);
         for (Shape sh : d.shapes()) {
             if (sh instanceof Text t) {

@@ -2,6 +2,7 @@ package dev.sheetwright.cli.output;
 
 import dev.sheetwright.cli.Cautions;
 import dev.sheetwright.cli.run.JobNest;
+import dev.sheetwright.cli.run.CutPlans;
 import dev.sheetwright.cli.run.JobQuote;
 import dev.sheetwright.core.develop.DevelopedPiece;
 import dev.sheetwright.core.develop.Development;
@@ -48,7 +49,11 @@ public record ShopReport(String title, List<String> facts, List<String[]> totals
     public record LayoutBlock(String heading, List<String[]> values, List<LayoutTable> tables) {
     }
 
-    public static ShopReport of(JobNest nest, Quote q) {
+    /**
+     * The report of a nest and its quote; with {@code path} (the sheets' cut plans, or null) each sheet picture
+     * also shows the cutting order and the rapids.
+     */
+    public static ShopReport of(JobNest nest, Quote q, CutPlans path) {
         Job job = nest.job();
         String u = job.unit().symbol();
         String w = q.weightUnit().symbol();
@@ -74,12 +79,13 @@ public record ShopReport(String title, List<String> facts, List<String[]> totals
         totals.add(row("Scrap weight", QuoteText.num(t.scrapWeight(), 2) + " " + w, "stock - parts"));
         totals.add(row("Utilization", String.format(Locale.ROOT, "%.1f %%", 100 * t.utilization()),
                 "part area / stock area"));
-        totals.add(row("Cut length", QuoteText.num(t.cutLength(), 1) + " " + u, "every closed contour"
-                + (t.leadInLength() > 0 ? " + " + QuoteText.num(t.leadInLength(), 1) + " " + u + " of lead-ins (job)"
-                : "; no lead-ins asked")));
+        totals.add(row("Cut length", QuoteText.num(t.cutLength(), 1) + " " + u, "the torch path of the cut"
+                + " programs: " + QuoteText.num(t.contourLength(), 1) + " " + u + " around the contours (half a kerf"
+                + " into scrap) + " + QuoteText.num(t.leadInLength(), 1) + " " + u + " of lead-ins and lead-outs"));
         totals.add(row("Pierces", String.valueOf(t.pierces()), "one per closed contour (outer + holes)"));
         totals.add(row("Rapid travel", QuoteText.num(t.rapidLength(), 1) + " " + u,
-                "nearest-next tour over pierce points per sheet (common practice)"));
+                "the programs' rapids: holes before outlines, nearest-next tour improved by 2-opt (common"
+                        + " practice)"));
         totals.add(row("Cut time", QuoteText.minutes(t.cutMinutes()), QuoteText.timeTerms(q)
                 + "; trade-reference 9.5 formula, rates below"));
         totals.add(row("Material cost", QuoteText.money(q, t.materialCost()), q.stock().stream()
@@ -120,7 +126,8 @@ public record ShopReport(String title, List<String> facts, List<String[]> totals
                     number, n, stockText(s, u), s.parts().size(), 100 * s.utilization(), NestJson.sheetFile(s)
                             + ".dxf");
             pages.add(new SheetPage(number, heading,
-                    ReportDrawings.sheet(s, JobQuote.placedParts(s, nest.plan()), job.unit()), labels));
+                    ReportDrawings.sheet(s, JobQuote.placedParts(s, nest.plan()), job.unit(),
+                            path == null ? null : path.of(s)), labels));
         }
         List<String[]> partList = new ArrayList<>();
         for (Map.Entry<String, int[]> e : counts.entrySet()) {

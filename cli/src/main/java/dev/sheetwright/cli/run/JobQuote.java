@@ -4,6 +4,7 @@ import dev.sheetwright.core.cutting.CutChart;
 import dev.sheetwright.core.develop.Development;
 import dev.sheetwright.core.geom.Pattern;
 import dev.sheetwright.core.job.Job;
+import dev.sheetwright.core.quote.CutFigures;
 import dev.sheetwright.core.quote.Quote;
 import dev.sheetwright.core.quote.QuoteRequest;
 import dev.sheetwright.core.quote.QuoteTerms;
@@ -25,11 +26,12 @@ public final class JobQuote {
     private JobQuote() {
     }
 
-    public static Quote of(JobNest nest, QuoteTerms terms, ShopSettings shop) {
+    /** The quote of a nest whose cut figures come from {@code plans}, the plans its programs are written from. */
+    public static Quote of(JobNest nest, CutPlans plans, QuoteTerms terms, ShopSettings shop) {
         Job job = nest.job();
         List<StockUse> stock = new ArrayList<>();
         for (SheetLayout s : nest.result().sheets()) {
-            stock.add(stockUse(s, placedParts(s, nest.plan())));
+            stock.add(stockUse(s, placedParts(s, nest.plan()), CutFigures.of(plans.of(s))));
         }
         List<String> devWarnings = new ArrayList<>();
         for (Development d : nest.developments()) {
@@ -48,13 +50,13 @@ public final class JobQuote {
         return out;
     }
 
-    private static StockUse stockUse(SheetLayout s, List<Pattern> parts) {
+    private static StockUse stockUse(SheetLayout s, List<Pattern> parts, CutFigures cut) {
         if (s.stock() instanceof Sheet sh) {
-            return StockUse.sheet(sh.name(), sh.width(), sh.height(), sh.cost(), parts);
+            return StockUse.sheet(sh.name(), sh.width(), sh.height(), sh.cost(), parts, cut);
         } else if (s.stock() instanceof Remnant r) {
-            return StockUse.remnant(r.id(), r.outline().getArea(), r.cost(), parts);
+            return StockUse.remnant(r.id(), r.outline().getArea(), r.cost(), parts, cut);
         }
         Coil c = (Coil) s.stock();
-        return StockUse.coil(c.name(), c.width(), s.usedLength(), c.costPerLength(), parts);
+        return StockUse.coil(c.name(), c.width(), s.usedLength(), c.costPerLength(), parts, cut);
     }
 }

@@ -20,18 +20,28 @@ public final class QuoteFiles {
     private QuoteFiles() {
     }
 
-    /** The quote of a nest, with the job file's {@code quote:} section and the shop settings. */
+    /** The quote of a nest, with the job file's {@code cutting:} leads, {@code quote:} section and the shop settings. */
     public static Quote quote(JobNest nest, Path jobFile, ShopSettings shop) {
-        QuoteTerms terms = JobReader.readFull(jobFile).quote();
-        return JobQuote.of(nest, terms, shop);
+        JobReader.JobFile file = JobReader.readFull(jobFile);
+        return JobQuote.of(nest, CutPlans.of(nest, file.cutPath()), file.quote(), shop);
     }
 
     /** Computes the quote and writes the four files into the staging folder. */
     public static Quote write(OutputFolder folder, JobNest nest, Path jobFile, ShopSettings shop) {
-        Quote q = quote(nest, jobFile, shop);
+        JobReader.JobFile file = JobReader.readFull(jobFile);
+        return write(folder, nest, CutPlans.of(nest, file.cutPath()), file.quote(), shop, false);
+    }
+
+    /**
+     * As {@link #write(OutputFolder, JobNest, Path, ShopSettings)} with the sheets' cut plans already made;
+     * {@code showPath} draws the cutting order and rapids on the report's sheet pictures.
+     */
+    public static Quote write(OutputFolder folder, JobNest nest, CutPlans plans, QuoteTerms terms,
+            ShopSettings shop, boolean showPath) {
+        Quote q = JobQuote.of(nest, plans, terms, shop);
         JsonFiles.write(QuoteJson.document(nest.job().name(), q), folder.file("quote.json"));
         QuoteCsv.write(q, folder.file("quote.csv"));
-        ShopReport report = ShopReport.of(nest, q);
+        ShopReport report = ShopReport.of(nest, q, showPath ? plans : null);
         ReportHtml.write(report, folder.file("report.html"));
         ReportPdf.write(report, folder.file("report.pdf"));
         return q;

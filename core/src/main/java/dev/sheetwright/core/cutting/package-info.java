@@ -10,7 +10,8 @@
  * {@code shop}) so a quote can show which numbers are sourced.
  *
  * <p>{@link dev.sheetwright.core.cutting.CutTimeEstimate} applies the cut-time formula of trade-reference §9.5 and keeps
- * each term; {@link dev.sheetwright.core.cutting.RapidPath} estimates rapid travel with a nearest-neighbour tour.
+ * each term; the work it is applied to (cut length, pierces, rapids) comes from the sheets' cut plans
+ * ({@code core.cutpath}).
  *
  * <p>Lengths are millimetres, speeds mm/min, pierce and sensing times seconds, handling minutes; inch helpers convert at
  * the edge. Bad input raises {@link java.lang.IllegalArgumentException} naming the field, value and valid range.

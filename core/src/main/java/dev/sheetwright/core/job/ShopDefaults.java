@@ -44,6 +44,22 @@ public final class ShopDefaults {
     }
 
     /**
+     * Lead-in (common practice, §9.4: 3-6 mm on thin plasma work, 1-3 mm laser): plasma 3/16 in, laser 1 mm, never
+     * longer than the gap less the kerf, so a lead cannot reach a neighbouring part.
+     */
+    public static double leadIn(CuttingProcess process, double gap, double kerf, LengthUnit unit) {
+        double asked = process == CuttingProcess.LASER
+                ? unit.convert(1, LengthUnit.MILLIMETRE)
+                : unit.convert(0.1875, LengthUnit.INCH);
+        return Math.max(0, Math.min(asked, gap - kerf));
+    }
+
+    /** Lead-out (common practice, §9.4: short or none on plasma, 0.5-1 mm laser): plasma none, laser 0.5 mm. */
+    public static double leadOut(CuttingProcess process, double leadIn, LengthUnit unit) {
+        return process == CuttingProcess.LASER ? Math.min(leadIn, unit.convert(0.5, LengthUnit.MILLIMETRE)) : 0;
+    }
+
+    /**
      * The largest length a job file may give for a fitting, a stock size or a cutting rule: 1000 in or 25,000 mm
      * (a sanity bound, common practice; well beyond any duct or sheet, far below sizes that break arithmetic).
      */

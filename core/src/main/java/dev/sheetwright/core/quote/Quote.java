@@ -7,12 +7,8 @@ import dev.sheetwright.core.cutting.CutRates;
 import dev.sheetwright.core.cutting.CutTimeEstimate;
 import dev.sheetwright.core.cutting.CutWork;
 import dev.sheetwright.core.cutting.CuttingProcess;
-import dev.sheetwright.core.cutting.PiercePoint;
 import dev.sheetwright.core.cutting.ProcessSettings;
-import dev.sheetwright.core.cutting.RapidPath;
-import dev.sheetwright.core.geom.Contour;
 import dev.sheetwright.core.geom.Pattern;
-import dev.sheetwright.core.geom.Point2;
 import dev.sheetwright.core.material.Material;
 import dev.sheetwright.core.material.UnitFactors;
 import dev.sheetwright.core.units.LengthUnit;
@@ -31,10 +27,10 @@ import java.util.OptionalDouble;
  *
  * <p>Arithmetic (trade-reference §8.4, computed formulas): stock weight = stock area x weight per area (whole sheets
  * billed); part weight = net part area x weight per area; scrap = stock - parts; utilization = part area / stock area;
- * material cost = count x price per sheet, or weight x price per weight. Cut length is every closed contour actually
- * cut plus the job's lead-in once per pierce; one pierce per closed contour. Cut time follows §9.5 with
- * {@link CutTimeEstimate}: rapids are a nearest-neighbour tour over each sheet's pierce points ({@link RapidPath}),
- * taking each contour's start point as its pierce point. Machine cost = cut hours x machine rate.
+ * material cost = count x price per sheet, or weight x price per weight. Cut length, pierces and rapids are read from
+ * each sheet's cut plan ({@link CutFigures}: the torch path around every contour plus its leads, one pierce per
+ * contour, the rapids of the planned order), the same plan its program is written from. Cut time follows §9.5 with
+ * {@link CutTimeEstimate}. Machine cost = cut hours x machine rate.
  *
  * @param areaUnit {@code ft2} for inch jobs, {@code m2} for millimetre jobs (areas for people)
  * @param stock one line per stock size, remnant or coil
@@ -72,7 +68,9 @@ public record Quote(LengthUnit unit, MassUnit weightUnit, String areaUnit, Mater
     /**
      * Totals. Areas in the quote's area unit, weights in its weight unit, lengths in the job unit.
      *
-     * @param cutLength contour length plus lead-ins
+     * @param cutLength contour length plus leads
+     * @param contourLength the torch path around the contours
+     * @param leadInLength lead-ins and lead-outs
      * @param cutMinutes total estimated minutes, empty when unknown
      * @param machineCost empty when the cut time is unknown and a machine rate was given
      * @param totalCost material plus machine cost, empty when the machine cost is unknown
@@ -122,6 +120,7 @@ public record Quote(LengthUnit unit, MassUnit weightUnit, String areaUnit, Mater
         double contourLength = 0;
         int pierces = 0;
         double rapidLength = 0;
+        double leadInLength = 0;
         for (StockUse s : request.stock()) {
             double area = peopleArea(unit, s.area());
             double weight = weightOf(material, unit, s.area());
@@ -151,17 +150,13 @@ public record Quote(LengthUnit unit, MassUnit weightUnit, String areaUnit, Mater
             lineFirst.putIfAbsent(key, s);
             lineBasis.merge(key, basis, (a, b) -> a.equals(b) ? a : a + "; " + b);
             stockArea += s.area();
-            List<PiercePoint> points = new ArrayList<>();
             for (Pattern p : s.parts()) {
                 partArea += p.area();
-                contourLength += p.cutLength();
-                pierces += p.contourCount();
-                for (Contour c : p.holes()) {
-                    points.add(piercePoint(unit, c));
-                }
-                points.add(piercePoint(unit, p.outer()));
             }
-            rapidLength += unit.fromMm(RapidPath.nearestNeighbour(points).length());
+            contourLength += s.cut().loopLength();
+            leadInLength += s.cut().leadLength();
+            pierces += s.cut().pierces();
+            rapidLength += s.cut().rapidLength();
         }
         List<StockLine> lines = new ArrayList<>();
         for (Map.Entry<String, double[]> e : lineSums.entrySet()) {
@@ -175,10 +170,6 @@ public record Quote(LengthUnit unit, MassUnit weightUnit, String areaUnit, Mater
         double materialCost = lines.stream().mapToDouble(StockLine::cost).sum();
 
         // ----- cut length and time (§8.4, §9.5)
-        double leadIn = terms.leadIn();
-        rates.add(new Rate("leadIn", "lead-in per pierce", leadIn, unit.symbol(),
-                leadIn > 0 ? Sourced.JOB : "none asked"));
-        double leadInLength = leadIn * pierces;
         double cutLength = contourLength + leadInLength;
         int sheets = request.stock().size();
         CutChart chart = shop.applyTo(request.chart());
@@ -249,10 +240,6 @@ public record Quote(LengthUnit unit, MassUnit weightUnit, String areaUnit, Mater
         return unit == LengthUnit.INCH ? material.weightLbOf(area) : material.weightKgOfMm2(area);
     }
 
-    private static PiercePoint piercePoint(LengthUnit unit, Contour c) {
-        Point2 p = c.edges().get(0).start();
-        return new PiercePoint(unit.toMm(p.x()), unit.toMm(p.y()));
-    }
 
     /** A note when the material's thickness falls between two chart rows, naming both rows. */
     private static Optional<String> interpolationNote(CutChart chart, CuttingProcess process, Material material,

@@ -10,13 +10,11 @@ import java.util.OptionalDouble;
  * @param currency code shown with money (e.g. {@code USD}), if given
  * @param price material price per lb or kg, if given (it then prices every stock line by weight)
  * @param machineRate machine cost per hour, if given
- * @param leadIn lead-in length added to the cut length once per pierce, job units (0 = none)
  */
-public record QuoteTerms(Optional<String> currency, Optional<WeightPrice> price, OptionalDouble machineRate,
-                         double leadIn) {
+public record QuoteTerms(Optional<String> currency, Optional<WeightPrice> price, OptionalDouble machineRate) {
 
     /** A job without a {@code quote:} section. */
-    public static final QuoteTerms NONE = new QuoteTerms(Optional.empty(), Optional.empty(), OptionalDouble.empty(), 0);
+    public static final QuoteTerms NONE = new QuoteTerms(Optional.empty(), Optional.empty(), OptionalDouble.empty());
 
     public QuoteTerms {
         Objects.requireNonNull(currency, "currency");
@@ -28,9 +26,6 @@ public record QuoteTerms(Optional<String> currency, Optional<WeightPrice> price,
         }
         if (machineRate.isPresent() && !(machineRate.getAsDouble() >= 0 && Double.isFinite(machineRate.getAsDouble()))) {
             throw new IllegalArgumentException("machine-rate must be finite and >= 0, was " + machineRate.getAsDouble());
-        }
-        if (!(leadIn >= 0) || !Double.isFinite(leadIn)) {
-            throw new IllegalArgumentException("lead-in must be finite and >= 0, was " + leadIn);
         }
     }
 }

@@ -22,6 +22,10 @@ import dev.sheetwright.core.units.LengthUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import dev.sheetwright.core.cutpath.CutPathSettings;
+import dev.sheetwright.core.cutpath.CutPlanner;
+import dev.sheetwright.core.cutpath.KerfCompensation;
+import dev.sheetwright.core.geom.Box2;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
@@ -36,8 +40,16 @@ class QuoteTest {
         return new Pattern(id, "blank", 1, c, List.of(), List.of(), new Point2(x + side / 2, y + side / 2));
     }
 
+    /** The figures of a real plan of the parts: no leads, no compensation, so the loops are the contours. */
+    private static CutFigures plainCut(List<Pattern> parts) {
+        List<String> labels = parts.stream().map(Pattern::key).toList();
+        return CutFigures.of(CutPlanner.plan(parts, labels, new Box2(0, 0, 120, 48),
+                new CutPathSettings(0.06, 0, 0, KerfCompensation.NONE), Tolerance.INCH));
+    }
+
     private static QuoteRequest oneSheet(Material material, QuoteTerms terms, ShopSettings shop, double sheetCost) {
-        StockUse sheet = StockUse.sheet("48x120", 120, 48, sheetCost, List.of(square("A", 1, 1, 24)));
+        List<Pattern> parts = List.of(square("A", 1, 1, 24));
+        StockUse sheet = StockUse.sheet("48x120", 120, 48, sheetCost, parts, plainCut(parts));
         return new QuoteRequest(LengthUnit.INCH, material, CuttingProcess.PLASMA, CutChart.defaults(), terms, shop,
                 List.of(sheet), List.of(), List.of());
     }
@@ -80,7 +92,7 @@ class QuoteTest {
     void of_pricePerLbFromJob_pricesStockByWeight() {
         // $8.75 per 100 lb on 24 ga gives $0.10115 per ft2 [S:LONG p.102, problem 25A] (computed): 40 ft2 -> $4.046
         QuoteTerms terms = new QuoteTerms(Optional.of("USD"), Optional.of(new WeightPrice(0.0875, MassUnit.LB,
-                Sourced.JOB)), OptionalDouble.empty(), 0);
+                Sourced.JOB)), OptionalDouble.empty());
         Quote q = Quote.of(oneSheet(Material.ofGauge(MaterialType.GALVANIZED, 24), terms, ShopSettings.NONE, 62.50));
         assertEquals(40 * 0.10115, q.totals().materialCost(), 1e-9);
         assertEquals(Optional.of("USD"), q.currency());
@@ -91,7 +103,7 @@ class QuoteTest {
     void of_pricePerKgInAnInchJob_convertsByTheExactPound() {
         // 1 lb = 0.45359237 kg exactly: 2.00 per kg = 0.90718474 per lb
         QuoteTerms terms = new QuoteTerms(Optional.of("EUR"), Optional.of(new WeightPrice(2.00, MassUnit.KG,
-                Sourced.JOB)), OptionalDouble.empty(), 0);
+                Sourced.JOB)), OptionalDouble.empty());
         Quote q = Quote.of(oneSheet(Material.ofGauge(MaterialType.GALVANIZED, 24), terms, ShopSettings.NONE, 0));
         assertEquals(46.24 * 2.00 * 0.45359237, q.totals().materialCost(), 1e-9);
     }
@@ -100,8 +112,7 @@ class QuoteTest {
     void of_workedCutTimeExample_is7point20MinutesPlusLoading() {
         // trade-reference §9.5 and §11 C12 (computed): 1200 in of cut at 200 in/min, 20 pierces x (0.3 s + 1.5 s),
         // 600 in of rapids at 1000 in/min -> 6.00 + 0.60 + 0.60 = 7.20 min, plus loading (2 min, common practice)
-        // 20 squares of 15 in (60 in of cut each) on a coil, pierced at their corners (30k, 0), k = 1..20: the
-        // nearest-neighbour tour from the origin is 30 + 19 x 30 = 600 in.
+        // 20 squares of 15 in (60 in of cut each) on a coil; the program's figures are given as the example's
         List<Pattern> parts = new ArrayList<>();
         for (int k = 1; k <= 20; k++) {
             parts.add(square("S" + k, 30 * k, 0, 15));
@@ -112,7 +123,8 @@ class QuoteTest {
         ShopSettings shop = new ShopSettings(List.of(machine), Map.of(CuttingProcess.PLASMA, 1000 * 25.4),
                 OptionalDouble.of(2.0), OptionalDouble.of(90), Optional.empty(), Optional.of("USD"));
         QuoteRequest r = new QuoteRequest(LengthUnit.INCH, galv24, CuttingProcess.PLASMA, CutChart.defaults(),
-                QuoteTerms.NONE, shop, List.of(StockUse.coil("coil 48", 48, 630, 0, parts)), List.of(), List.of());
+                QuoteTerms.NONE, shop, List.of(StockUse.coil("coil 48", 48, 630, 0, parts,
+                        new CutFigures(1200, 0, 20, 600))), List.of(), List.of());
 
         Quote q = Quote.of(r);
 
@@ -132,12 +144,26 @@ class QuoteTest {
     }
 
     @Test
-    void of_leadIn_addsOneLeadInPerPierce() {
-        QuoteTerms terms = new QuoteTerms(Optional.empty(), Optional.empty(), OptionalDouble.empty(), 0.25);
-        Quote q = Quote.of(oneSheet(Material.ofGauge(MaterialType.GALVANIZED, 24), terms, ShopSettings.NONE, 0));
+    void of_cutFigures_comeFromEachSheetsPlanAndAddUp() {
+        Material galv24 = Material.ofGauge(MaterialType.GALVANIZED, 24);
+        StockUse a = StockUse.sheet("48x120", 120, 48, 0, List.of(), new CutFigures(100, 2.5, 10, 300));
+        StockUse b = StockUse.sheet("48x120", 120, 48, 0, List.of(), new CutFigures(40, 0.5, 3, 70));
+        Quote q = Quote.of(new QuoteRequest(LengthUnit.INCH, galv24, CuttingProcess.PLASMA, CutChart.defaults(),
+                QuoteTerms.NONE, ShopSettings.NONE, List.of(a, b), List.of(), List.of()));
+        assertEquals(140, q.totals().contourLength(), EPS);
+        assertEquals(3.0, q.totals().leadInLength(), EPS);
+        assertEquals(143, q.totals().cutLength(), EPS);
+        assertEquals(13, q.totals().pierces());
+        assertEquals(370, q.totals().rapidLength(), EPS);
+    }
+
+    @Test
+    void of_oneSquareSheet_cutsItsPerimeterWithOnePierce() {
+        Quote q = Quote.of(oneSheet(Material.ofGauge(MaterialType.GALVANIZED, 24), QuoteTerms.NONE, ShopSettings.NONE,
+                0));
         assertEquals(96, q.totals().contourLength(), EPS);
-        assertEquals(0.25, q.totals().leadInLength(), EPS);
-        assertEquals(96.25, q.totals().cutLength(), EPS);
+        assertEquals(0, q.totals().leadInLength(), EPS);
+        assertEquals(1, q.totals().pierces());
     }
 
     @Test
@@ -154,7 +180,7 @@ class QuoteTest {
     @Test
     void of_thicknessOutsideTheChart_leavesCutTimeUnknownWithAWarning() {
         Material plate = Material.ofThickness(MaterialType.STEEL, 0.25); // 6.35 mm, the chart stops at 4.0 mm
-        QuoteTerms terms = new QuoteTerms(Optional.of("USD"), Optional.empty(), OptionalDouble.of(120), 0);
+        QuoteTerms terms = new QuoteTerms(Optional.of("USD"), Optional.empty(), OptionalDouble.of(120));
         Quote q = Quote.of(oneSheet(plate, terms, ShopSettings.NONE, 100));
 
         assertTrue(q.cutTime().isEmpty());
@@ -183,7 +209,7 @@ class QuoteTest {
     void of_millimetreJob_givesKilogramsAndSquareMetres() {
         // 24 ga galvanized 5.64 kg/m2 [S:SMACNA-GALV]; from 1.156 lb/ft2 x 4.88242764 = 5.6441 (computed)
         Material galv24 = Material.ofGauge(MaterialType.GALVANIZED, 24);
-        StockUse sheet = StockUse.sheet("1250x2500", 2500, 1250, 0, List.of());
+        StockUse sheet = StockUse.sheet("1250x2500", 2500, 1250, 0, List.of(), CutFigures.NONE);
         Quote q = Quote.of(new QuoteRequest(LengthUnit.MILLIMETRE, galv24, CuttingProcess.LASER, CutChart.defaults(),
                 QuoteTerms.NONE, ShopSettings.NONE, List.of(sheet), List.of(), List.of()));
         assertEquals("kg", q.weightUnit().symbol());
@@ -200,7 +226,7 @@ class QuoteTest {
                 new PipeSpec("P2", 2, 6, 24, 1, snap));
         QuoteRequest r = new QuoteRequest(LengthUnit.INCH, Material.ofGauge(MaterialType.GALVANIZED, 10),
                 CuttingProcess.PLASMA, CutChart.defaults(), QuoteTerms.NONE, ShopSettings.NONE,
-                List.of(StockUse.sheet("48x120", 120, 48, 0, List.of())), fittings, List.of("dev warning", "dev warning"));
+                List.of(StockUse.sheet("48x120", 120, 48, 0, List.of(), CutFigures.NONE)), fittings, List.of("dev warning", "dev warning"));
 
         Quote q = Quote.of(r);
 
