@@ -18,6 +18,8 @@ final class Separator {
     static final int BIN_SAMPLES = 24;
     static final int LOCAL_SAMPLES = 24;
     static final int REFINED = 2;
+    /** Rounds of sliding against box sides after a refinement. */
+    static final int SNAP_ROUNDS = 3;
     static final double WEIGHT_DECAY = 0.95;
     /** Refinement stops below this step, as a share of the piece's size. */
     static final double SMALLEST_STEP_SHARE = 1e-4;
@@ -98,9 +100,11 @@ final class Separator {
         java.util.Arrays.fill(outWeight, 1);
     }
 
+    /** How far s sticks out of bin b; within the precision (what the checker forgives) it is inside. */
     private double outsideOf(PlacedShape s, int b) {
         double[] bx = boxes[b];
-        return OverlapMeasure.outside(s, bx[0], bx[1], bx[2], bx[3]);
+        double o = OverlapMeasure.outside(s, bx[0], bx[1], bx[2], bx[3]);
+        return o <= precision ? 0 : o;
     }
 
     double outOf(int i) {
@@ -297,7 +301,84 @@ final class Separator {
                 astep /= 2;
             }
         }
+        if (c > 0) {
+            double[] snapped = snap(i, b, x, y, a, c);
+            x = snapped[0];
+            y = snapped[1];
+            c = snapped[2];
+        }
         return new double[] {b, x, y, a, c};
+    }
+
+    /**
+     * Exact fits: slides the piece so that its bounding box lies against a side of the bin or of a piece it collides
+     * with, a few rounds, keeping a slide when it lowers the cost. Steps that halve never land a piece exactly in a
+     * gap as wide as the piece; these do.
+     */
+    private double[] snap(int i, int b, double x, double y, double a, double c) {
+        SearchShape sh = shapes[i];
+        double[] bx = boxes[b];
+        for (int round = 0; round < SNAP_ROUNDS && c > 0; round++) {
+            cand.set(sh, x, y, a);
+            double w0 = cand.minX - x;
+            double w1 = cand.maxX - x;
+            double h0 = cand.minY - y;
+            double h1 = cand.maxY - y;
+            double bestX = x;
+            double bestY = y;
+            double best = c;
+            // sides of the bin, then of the pieces the candidate's box meets
+            double[] xs = {bx[0] - w0, bx[2] - w1};
+            double[] ys = {bx[1] - h0, bx[3] - h1};
+            for (double nx : xs) {
+                cand.set(sh, nx, y, a);
+                double nc = cost(i, cand, b, best);
+                if (nc < best) {
+                    best = nc;
+                    bestX = nx;
+                    bestY = y;
+                }
+            }
+            for (double ny : ys) {
+                cand.set(sh, x, ny, a);
+                double nc = cost(i, cand, b, best);
+                if (nc < best) {
+                    best = nc;
+                    bestX = x;
+                    bestY = ny;
+                }
+            }
+            double minX = x + w0;
+            double maxX = x + w1;
+            double minY = y + h0;
+            double maxY = y + h1;
+            for (int j = 0; j < n; j++) {
+                if (j == i || bin[j] != b) {
+                    continue;
+                }
+                PlacedShape o = at[j];
+                if (o.maxX <= minX || o.minX >= maxX || o.maxY <= minY || o.minY >= maxY) {
+                    continue;
+                }
+                double[][] slides = {{o.maxX - w0, y}, {o.minX - w1, y}, {x, o.maxY - h0}, {x, o.minY - h1}};
+                for (double[] sl : slides) {
+                    cand.set(sh, sl[0], sl[1], a);
+                    double nc = cost(i, cand, b, best);
+                    if (nc < best) {
+                        best = nc;
+                        bestX = sl[0];
+                        bestY = sl[1];
+                    }
+                }
+            }
+            if (!(best < c)) {
+                break;
+            }
+            x = bestX;
+            y = bestY;
+            c = best;
+        }
+        return new double[] {x, y, c};
     }
 
     /** Recomputes the overlaps of piece i after it moved. */

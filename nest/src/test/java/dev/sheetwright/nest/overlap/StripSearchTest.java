@@ -69,6 +69,27 @@ class StripSearchTest {
     }
 
     @Test
+    void aLooseLayoutIsShortenedAndStillPassesTheChecker() {
+        // eight 2 x 2 squares one after another along a strip 4 high: 16 long; two rows of four fit in 8
+        List<StripInstance.Item> items = List.of(new StripInstance.Item(1, 8, Shapes.rect(0, 0, 2, 2)));
+        StripInstance inst = new StripInstance("squares", 4, List.of(0.0), items);
+        var request = inst.toRequest();
+        List<Placement> spread = new ArrayList<>();
+        for (int i = 0; i < 8; i++) {
+            spread.add(new Placement("squares", StripInstance.pieceName(1), i, 2 * i, 0, 0, false));
+        }
+        var coil = request.stock().get(0);
+        var start = new dev.sheetwright.nest.model.NestResult(List.of(new dev.sheetwright.nest.model.SheetLayout(coil, 0, 16,
+                spread, null, 0.5)), List.of());
+        assertTrue(NestChecker.check(request, start).isEmpty());
+        var shorter = StripSearch.shorten(request, start, NestOptions.steps(4000, 1, 2), Long.MAX_VALUE / 4);
+        double length = shorter.sheets().get(0).usedLength();
+        assertTrue(length < 12, "the search must shorten the strip well below 16, got " + length);
+        assertTrue(length >= 8 - 1e-9, "no layout is shorter than the area bound 8, got " + length);
+        assertTrue(NestChecker.check(request, shorter).isEmpty(), "checker: " + NestChecker.check(request, shorter));
+    }
+
+    @Test
     void resultsPlaceEveryCopyOnce() {
         StripInstance inst = mixed(List.of(0.0, 180.0));
         StripPacker.StripResult r = StripPacker.packWithOverlapSearch(inst, NestOptions.steps(400, 3, 2));
