@@ -4,7 +4,7 @@ import java.util.SplittableRandom;
 
 /**
  * Removes the overlap of a layout by guided local search. Pieces live in rectangular bins (a strip cut to length; a
- * piece may move to any open bin, for sheets, though only the strip search uses one bin so far); pieces in one bin must not collide and must stay inside it. One overlapping piece at a time moves to the
+ * piece may move to any open bin: the sheet search uses one bin per sheet); pieces in one bin must not collide and must stay inside it. One overlapping piece at a time moves to the
  * position, bin and rotation that minimise its weighted overlap (samples over every bin and around the current
  * position, the best refined by coordinate descent); the weight of a pair that keeps overlapping grows, and decays
  * when they are apart. A run ends when the overlap is zero, or after {@link #STRIKES} rounds without progress.
@@ -34,6 +34,11 @@ final class Separator {
     double[][] boxes;
     /** Bins a piece may move to (a strip has one). */
     boolean[] open;
+    /**
+     * Pieces that never move (e.g. a part holding others in its holes); they stay where the caller placed them, and
+     * two fixed pieces are never counted as overlapping (the caller placed them apart).
+     */
+    final boolean[] fixed;
     private final double[][] pair;
     private final double[][] weight;
     private final double[] out;
@@ -55,6 +60,7 @@ final class Separator {
             at[i] = new PlacedShape();
         }
         this.bin = new int[n];
+        this.fixed = new boolean[n];
         this.boxes = boxes;
         this.open = new boolean[boxes.length];
         java.util.Arrays.fill(open, true);
@@ -84,13 +90,18 @@ final class Separator {
     /** Recomputes every overlap (after pieces were placed or bins changed). */
     void refresh() {
         for (int i = 0; i < n; i++) {
-            out[i] = outsideOf(at[i], bin[i]);
+            out[i] = fixed[i] ? 0 : outsideOf(at[i], bin[i]);
             for (int j = i + 1; j < n; j++) {
-                double o = bin[i] == bin[j] ? measure.overlap(at[i], at[j]) : 0;
+                double o = counts(i, j) ? measure.overlap(at[i], at[j]) : 0;
                 pair[i][j] = o;
                 pair[j][i] = o;
             }
         }
+    }
+
+    /** Whether the overlap of pieces i and j counts: they share a bin and are not both fixed. */
+    private boolean counts(int i, int j) {
+        return bin[i] == bin[j] && !(fixed[i] && fixed[j]);
     }
 
     void resetWeights() {
@@ -163,6 +174,9 @@ final class Separator {
     }
 
     private boolean move(int i, boolean away) {
+        if (fixed[i]) {
+            return false;
+        }
         moves++;
         double bestCost = away ? Double.POSITIVE_INFINITY : cost(i, at[i], bin[i], Double.POSITIVE_INFINITY);
         if (bestCost == 0) {
@@ -383,12 +397,12 @@ final class Separator {
 
     /** Recomputes the overlaps of piece i after it moved. */
     void update(int i) {
-        out[i] = outsideOf(at[i], bin[i]);
+        out[i] = fixed[i] ? 0 : outsideOf(at[i], bin[i]);
         for (int j = 0; j < n; j++) {
             if (j == i) {
                 continue;
             }
-            double o = bin[i] == bin[j] ? measure.overlap(at[i], at[j]) : 0;
+            double o = counts(i, j) ? measure.overlap(at[i], at[j]) : 0;
             pair[i][j] = o;
             pair[j][i] = o;
         }
@@ -459,7 +473,7 @@ final class Separator {
                 }
                 int m = 0;
                 for (int i = 0; i < n; i++) {
-                    if (overlapOf(i) > 0) {
+                    if (!fixed[i] && overlapOf(i) > 0) {
                         order[m++] = i;
                     }
                 }
