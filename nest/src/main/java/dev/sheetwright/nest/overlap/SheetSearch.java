@@ -281,13 +281,15 @@ public final class SheetSearch {
             for (int i = 0; i < sep.n; i++) {
                 Placement p = parts.get(i);
                 double[] ref = PiecePoses.reference(p, shapes[i]);
-                sep.fixed[i] = partFixed[i];
                 sep.place(i, partBin.get(i), ref[0], ref[1], p.rotationDeg());
             }
-            // the first layout is feasible for the true outlines; its search shapes may still touch: separate first
-            if (!sep.separate(budget)) {
-                return null;
+            // the first layout is feasible for the true outlines, but search shapes are larger: every part starts
+            // settled (what it overlaps there is forgiven) until it moves
+            for (int i = 0; i < sep.n; i++) {
+                sep.fixed[i] = partFixed[i];
+                sep.settled[i] = !partFixed[i];
             }
+            sep.refresh();
             double[][] best = sep.snapshot();
             boolean[] bestOpen = sep.open.clone();
             int startSheets = count(bestOpen);
@@ -320,13 +322,13 @@ public final class SheetSearch {
             return sheets < startSheets ? new Found(best, bestOpen, sheets, costOf(bestOpen)) : null;
         }
 
-        /** Open bins with no fixed part and more than one open bin left, least filled first (ties: the later bin). */
+        /** Open bins with no part holding others and more than one open bin left, least filled first (ties: the later bin). */
         private List<Integer> emptiable() {
             double[] area = new double[boxes.length];
             boolean[] blocked = new boolean[boxes.length];
             for (int i = 0; i < sep.n; i++) {
                 area[sep.bin[i]] += shapes[i].area;
-                blocked[sep.bin[i]] |= sep.fixed[i];
+                blocked[sep.bin[i]] |= partFixed[i];
             }
             for (int b = 0; b < boxes.length; b++) {
                 blocked[b] |= !held.get(b).isEmpty();
