@@ -228,7 +228,8 @@ public final class SheetSearch {
             this.best = sheets;
         }
 
-        synchronized void found(long moves, boolean[] open) {
+        /** {@code lastLength}: how far the parts of the last open sheet reach along x, margin included. */
+        synchronized void found(long moves, boolean[] open, double lastLength) {
             int sheets = 0;
             for (boolean o : open) {
                 sheets += o ? 1 : 0;
@@ -255,7 +256,7 @@ public final class SheetSearch {
             for (SheetLayout l : start.sheets()) {
                 cost += l.stock().match(sh -> 0.0, r -> r.cost(), c -> c.costPerLength() * l.usedLength());
             }
-            options.listener().improved(moves, sheets + others, cost, Double.NaN,
+            options.listener().improved(moves, sheets + others, cost, lastLength,
                     stockArea > 0 ? Math.min(1, partArea / stockArea) : 0);
         }
     }
@@ -311,7 +312,7 @@ public final class SheetSearch {
                     best = sep.snapshot();
                     bestOpen = sep.open.clone();
                     fails = 0;
-                    progress.found(sep.moves(), bestOpen);
+                    progress.found(sep.moves(), bestOpen, lastLength());
                 } else {
                     System.arraycopy(bestOpen, 0, sep.open, 0, bestOpen.length);
                     sep.restore(best);
@@ -320,6 +321,24 @@ public final class SheetSearch {
             }
             int sheets = count(bestOpen);
             return sheets < startSheets ? new Found(best, bestOpen, sheets, costOf(bestOpen)) : null;
+        }
+
+        /** How far the search shapes on the last open sheet reach along x, less the half gap they carry, plus the margin. */
+        private double lastLength() {
+            int last = -1;
+            for (int b = 0; b < sep.open.length; b++) {
+                if (sep.open[b]) {
+                    last = b;
+                }
+            }
+            double reach = 0;
+            for (int i = 0; i < sep.n; i++) {
+                if (sep.bin[i] == last) {
+                    reach = Math.max(reach, sep.at[i].maxX);
+                }
+            }
+            double gap = request.rules().gap();
+            return Math.max(0, reach - gap / 2 + request.rules().margin());
         }
 
         /** Open bins with no part holding others and more than one open bin left, least filled first (ties: the later bin). */
