@@ -3,6 +3,7 @@
 # writes a Markdown table to bench/strip-results.md (or --out FILE).
 #
 # usage: bench/run-strip-benchmarks.sh [--times 10,60] [--seed N] [--dir DIR] [--jar JAR] [--only a,b] [--out FILE]
+#        [--overlap-search]   (the experimental overlap-minimising search after the first layout)
 # CI smoke: bench/run-strip-benchmarks.sh --times 2 --only fu --out /tmp/strip-smoke.md
 set -euo pipefail
 
@@ -18,6 +19,7 @@ jar="$root/cli/target/sheetwright.jar"
 only=""
 out="$here/strip-results.md"
 java="${JAVA:-/usr/bin/java}"
+extra=()
 
 while [ $# -gt 0 ]; do
   case "$1" in
@@ -27,7 +29,8 @@ while [ $# -gt 0 ]; do
     --jar) jar="$2"; shift 2 ;;
     --only) only="$2"; shift 2 ;;
     --out) out="$2"; shift 2 ;;
-    -h|--help) sed -n '2,6p' "$0"; exit 0 ;;
+    --overlap-search) extra+=(--overlap-search); shift ;;
+    -h|--help) sed -n '2,7p' "$0"; exit 0 ;;
     *) echo "unknown argument: $1" >&2; exit 2 ;;
   esac
 done
@@ -70,7 +73,7 @@ for f in "$dir"/*.json; do
     # a failed run (violations: exit 1; a failure: exit 1 with no line) is recorded in the table, and the
     # remaining instances still run; the script then exits 1
     rc=0
-    line="$("${run[@]}" "$f" --time "$t" --seed "$seed")" || rc=$?
+    line="$("${run[@]}" "$f" --time "$t" --seed "$seed" "${extra[@]}")" || rc=$?
     if [[ "$line" != *'"density"'* ]]; then
       echo "$name at ${t}s: no result line (exit $rc)" >&2
       failed=1
@@ -91,7 +94,7 @@ done
   echo "# Strip benchmark results"
   echo
   echo "Run $(date -u +%Y-%m-%dT%H:%MZ) on $(nproc) cores (load average at end: $(cut -d' ' -f1-3 /proc/loadavg)), seed $seed,"
-  echo "with \`${run[*]} FILE --time S\`. Density = item area / (strip height x length). 'viol.' = violations found by"
+  echo "with \`${run[*]} FILE --time S${extra[*]:+ ${extra[*]}}\`. Density = item area / (strip height x length). 'viol.' = violations found by"
   echo "NestChecker (0 = valid layout). Ratio = density / the 2025 record density (section B2 of the benchmark"
   echo "folder's README.md, read at run time)."
   echo

@@ -50,11 +50,15 @@ public final class BenchStripCommand implements Callable<Integer> {
     @Option(names = "--dxf", paramLabel = "OUT.dxf", description = "Also write the layout as DXF (CUT: parts, SHEET: strip).")
     Path dxf;
 
+    @Option(names = "--overlap-search", description = "Shorten the first layout with the overlap-minimising search (experimental).")
+    boolean overlapSearch;
+
     @Override
     public Integer call() throws JsonProcessingException {
         NestOptions options = search.nestOptions(DEFAULT_SECONDS, ProgressListener.NONE);
         StripInstance instance = StripInstance.read(file);
-        StripPacker.StripResult r = StripPacker.pack(instance, options);
+        StripPacker.StripResult r = overlapSearch ? StripPacker.packWithOverlapSearch(instance, options)
+                : StripPacker.pack(instance, options);
         int violations = NestChecker.check(instance.toRequest(), r.nest()).size();
         Map<String, Object> line = new LinkedHashMap<>();
         line.put("instance", instance.name());

@@ -1,0 +1,205 @@
+package dev.sheetwright.nest.overlap;
+
+/**
+ * Whether two placed search shapes collide (decided exactly: bounding boxes, then proper edge crossings, then
+ * containment) and, if they do, how much: the summed penetration depth of their poles (inscribed circles),
+ * r1 + r2 - distance for every pair of poles that overlap deeper than {@link #SHALLOW} of their radii (less for
+ * shallow or apart pairs), or the depth of the deepest corner of one inside the other if that is more, never less
+ * than {@code floor}. For two discs (one pole each) overlapping deeper than
+ * that it is the exact penetration depth (the shortest move that separates them). Boundaries that only touch do not collide.
+ */
+final class OverlapMeasure {
+    /** Below this share of their radii two poles count as barely touching (see {@link #poleDepth}). */
+    static final double SHALLOW = 0.01;
+
+    private final double floor;
+    private final double slack;
+
+    /**
+     * {@code floor}: the least overlap a collision counts as (a small length, > 0); {@code slack}: how far an edge may
+     * cross another and still count as touching (the search's precision, >= 0; callers grow shapes by as much).
+     */
+    OverlapMeasure(double floor, double slack) {
+        if (!(floor > 0) || !(slack >= 0)) {
+            throw new IllegalArgumentException("floor must be > 0 and slack >= 0, got " + floor + ", " + slack);
+        }
+        this.floor = floor;
+        this.slack = slack;
+    }
+
+    /** Overlap of a and b: 0 when they do not collide. */
+    double overlap(PlacedShape a, PlacedShape b) {
+        if (a.maxX <= b.minX || b.maxX <= a.minX || a.maxY <= b.minY || b.maxY <= a.minY) {
+            return 0;
+        }
+        if (!collide(a, b)) {
+            return 0;
+        }
+        return Math.max(floor, Math.max(poleDepth(a, b), Math.max(cornerDepth(a, b), cornerDepth(b, a))));
+    }
+
+    /**
+     * How deep the corners of a reach into b: the largest distance from a vertex of a inside b to the boundary of b.
+     * It sees the shallow corner overlaps the poles miss.
+     */
+    static double cornerDepth(PlacedShape a, PlacedShape b) {
+        double deepest = 0;
+        int nb = b.n();
+        for (int i = 0; i < a.n(); i++) {
+            double x = a.wx[i];
+            double y = a.wy[i];
+            if (!inside(x, y, b)) {
+                continue;
+            }
+            double d2 = Double.POSITIVE_INFINITY;
+            for (int j = 0, pj = nb - 1; j < nb; pj = j++) {
+                d2 = Math.min(d2, segmentDistance2(x, y, b.wx[pj], b.wy[pj], b.wx[j], b.wy[j]));
+            }
+            deepest = Math.max(deepest, Math.sqrt(d2));
+        }
+        return deepest;
+    }
+
+    private static double segmentDistance2(double x, double y, double x0, double y0, double x1, double y1) {
+        double dx = x1 - x0;
+        double dy = y1 - y0;
+        double l2 = dx * dx + dy * dy;
+        double t = l2 > 0 ? Math.max(0, Math.min(1, ((x - x0) * dx + (y - y0) * dy) / l2)) : 0;
+        double ex = x0 + t * dx - x;
+        double ey = y0 + t * dy - y;
+        return ex * ex + ey * ey;
+    }
+
+    /**
+     * Summed penetration depth of the poles of a and b. A pair of poles that overlaps by less than a hundredth of its
+     * radii (or not at all) still adds a little, falling off with the distance, so the search feels which way is out.
+     */
+    static double poleDepth(PlacedShape a, PlacedShape b) {
+        double sum = 0;
+        double[] ar = a.shape.poleR;
+        double[] br = b.shape.poleR;
+        for (int i = 0; i < ar.length; i++) {
+            for (int j = 0; j < br.length; j++) {
+                double dx = a.px[i] - b.px[j];
+                double dy = a.py[i] - b.py[j];
+                double rr = ar[i] + br[j];
+                double pd = rr - Math.sqrt(dx * dx + dy * dy);
+                double e = SHALLOW * rr;
+                sum += pd >= e ? pd : e * e / (2 * e - pd);
+            }
+        }
+        return sum;
+    }
+
+    /** Exact collision of two simple polygons (interiors intersect). */
+    boolean collide(PlacedShape a, PlacedShape b) {
+        int na = a.n();
+        int nb = b.n();
+        double ox0 = Math.max(a.minX, b.minX);
+        double ox1 = Math.min(a.maxX, b.maxX);
+        double oy0 = Math.max(a.minY, b.minY);
+        double oy1 = Math.min(a.maxY, b.maxY);
+        double[] la = a.shape.edgeLength;
+        double[] lb = b.shape.edgeLength;
+        for (int i = 0, pi = na - 1; i < na; pi = i++) {
+            double ax0 = a.wx[pi];
+            double ay0 = a.wy[pi];
+            double ax1 = a.wx[i];
+            double ay1 = a.wy[i];
+            // only edges of a that reach into the common box can cross b
+            // (an edge on the border of the common box still counts: the other shape reaches past it)
+            if (Math.max(ax0, ax1) < ox0 || Math.min(ax0, ax1) > ox1 || Math.max(ay0, ay1) < oy0 || Math.min(ay0, ay1) > oy1) {
+                continue;
+            }
+            double ex0 = Math.min(ax0, ax1);
+            double ex1 = Math.max(ax0, ax1);
+            double ey0 = Math.min(ay0, ay1);
+            double ey1 = Math.max(ay0, ay1);
+            for (int j = 0, pj = nb - 1; j < nb; pj = j++) {
+                double bx0 = b.wx[pj];
+                double by0 = b.wy[pj];
+                double bx1 = b.wx[j];
+                double by1 = b.wy[j];
+                if (Math.max(bx0, bx1) <= ex0 || Math.min(bx0, bx1) >= ex1 || Math.max(by0, by1) <= ey0 || Math.min(by0, by1) >= ey1) {
+                    continue;
+                }
+                if (properCross(ax0, ay0, ax1, ay1, la[i] * slack, bx0, by0, bx1, by1, lb[j] * slack)) {
+                    return true;
+                }
+            }
+        }
+        // no proper crossing: apart, touching, one inside the other, or crossing only at vertices and along
+        // collinear edges; test a deep point, every vertex and every edge midpoint of each against the other
+        return inside(a.px[0], a.py[0], b) || inside(b.px[0], b.py[0], a) || pointsInside(a, b) || pointsInside(b, a);
+    }
+
+    /** Whether a vertex or an edge midpoint of a lies inside b, farther than the slack from its boundary. */
+    private boolean pointsInside(PlacedShape a, PlacedShape b) {
+        int na = a.n();
+        for (int i = 0, pi = na - 1; i < na; pi = i++) {
+            if (deepInside(a.wx[i], a.wy[i], b) || deepInside((a.wx[i] + a.wx[pi]) / 2, (a.wy[i] + a.wy[pi]) / 2, b)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private boolean deepInside(double x, double y, PlacedShape s) {
+        if (!inside(x, y, s)) {
+            return false;
+        }
+        double limit = Math.max(slack, Double.MIN_NORMAL);
+        int n = s.n();
+        for (int j = 0, pj = n - 1; j < n; pj = j++) {
+            if (segmentDistance2(x, y, s.wx[pj], s.wy[pj], s.wx[j], s.wy[j]) <= limit * limit) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * Whether segment ab crosses segment cd by more than the slack: each end of one is farther than the slack from the
+     * other's line, on opposite sides ({@code sab}, {@code scd}: slack times the segment's length).
+     */
+    private static boolean properCross(double ax, double ay, double bx, double by, double sab,
+            double cx, double cy, double dx, double dy, double scd) {
+        double d1 = orient(cx, cy, dx, dy, ax, ay);
+        double d2 = orient(cx, cy, dx, dy, bx, by);
+        if (!(d1 > scd && d2 < -scd || d1 < -scd && d2 > scd)) {
+            return false;
+        }
+        double d3 = orient(ax, ay, bx, by, cx, cy);
+        double d4 = orient(ax, ay, bx, by, dx, dy);
+        return d3 > sab && d4 < -sab || d3 < -sab && d4 > sab;
+    }
+
+    private static double orient(double ax, double ay, double bx, double by, double cx, double cy) {
+        return (bx - ax) * (cy - ay) - (by - ay) * (cx - ax);
+    }
+
+    /** Even-odd point in polygon; a point on the boundary may go either way (the callers test deep points). */
+    static boolean inside(double x, double y, PlacedShape s) {
+        if (x < s.minX || x > s.maxX || y < s.minY || y > s.maxY) {
+            return false;
+        }
+        boolean in = false;
+        int n = s.n();
+        for (int i = 0, j = n - 1; i < n; j = i++) {
+            double yi = s.wy[i];
+            double yj = s.wy[j];
+            if ((yi > y) != (yj > y)) {
+                double xc = s.wx[j] + (y - yj) / (yi - yj) * (s.wx[i] - s.wx[j]);
+                if (x < xc) {
+                    in = !in;
+                }
+            }
+        }
+        return in;
+    }
+
+    /** How far the shape sticks out of the box [x0, x1] x [y0, y1], summed over the four sides (0 when inside). */
+    static double outside(PlacedShape s, double x0, double y0, double x1, double y1) {
+        return Math.max(0, x0 - s.minX) + Math.max(0, s.maxX - x1) + Math.max(0, y0 - s.minY) + Math.max(0, s.maxY - y1);
+    }
+}

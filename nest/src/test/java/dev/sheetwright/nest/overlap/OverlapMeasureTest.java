@@ -1,0 +1,122 @@
+package dev.sheetwright.nest.overlap;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.SplittableRandom;
+
+import org.junit.jupiter.api.Test;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.geom.util.AffineTransformation;
+
+import dev.sheetwright.nest.testing.Shapes;
+
+class OverlapMeasureTest {
+    static final double EPS = 1e-9;
+    private final OverlapMeasure measure = new OverlapMeasure(1e-6, 0);
+
+    private static PlacedShape at(SearchShape s, double x, double y, double angle) {
+        PlacedShape p = new PlacedShape();
+        p.set(s, x, y, angle);
+        return p;
+    }
+
+    @Test
+    void twoEqualSquaresSideBySideOverlapAtLeastByThePenetrationDepthAndLessWhenFartherApart() {
+        SearchShape sq = SearchShape.of(Shapes.rect(0, 0, 10, 10), 0, 1e-9);
+        double last = Double.POSITIVE_INFINITY;
+        for (double dx : new double[] {1, 3.5, 7, 9.9}) {
+            double o = measure.overlap(at(sq, 0, 0, 0), at(sq, dx, 0, 0));
+            // the inscribed circles measure 10 - shift between the centre poles, plus the corner poles' share
+            assertTrue(o >= 10 - dx - 1e-6, "shift " + dx + ": " + o + " below the penetration depth " + (10 - dx));
+            assertTrue(o < last, "the measure falls as the squares move apart");
+            last = o;
+        }
+        assertEquals(0, measure.overlap(at(sq, 0, 0, 0), at(sq, 10, 0, 0)), EPS, "touching is no overlap");
+        assertEquals(0, measure.overlap(at(sq, 0, 0, 0), at(sq, 10.5, 3, 0)), EPS);
+    }
+
+    @Test
+    void aCornerThePolesMissStillCountsByItsDepth() {
+        SearchShape sq = SearchShape.of(Shapes.rect(0, 0, 10, 10), 0, 1e-9);
+        // b's bottom-left corner 0.3 inside a's top-right corner, turned 45 degrees so only the corner enters
+        PlacedShape a = at(sq, 0, 0, 0);
+        double h = 5 * Math.sqrt(2);
+        PlacedShape b = at(sq, 5 + 0.3 / Math.sqrt(2) + h / Math.sqrt(2) * 0 + 0, 0, 45);
+        b.set(sq, 5 - 0.3 + h, 5 - 0.3 + 0, 45);
+        assertTrue(OverlapMeasure.cornerDepth(b, a) > 0, "b's corner is inside a");
+        assertTrue(measure.overlap(a, b) >= OverlapMeasure.cornerDepth(b, a) - EPS);
+    }
+
+    @Test
+    void twoDiscsOverlapByRadiusSumLessDistance() {
+        double r1 = 5;
+        double r2 = 3;
+        // 40-gons (no simplification below 48 vertices), so the inscribed radius is r cos(pi / 40)
+        SearchShape a = SearchShape.of(disc(r1, 40), 0, 1e-9);
+        SearchShape b = SearchShape.of(disc(r2, 40), 0, 1e-9);
+        double in = Math.cos(Math.PI / 40);
+        assertEquals(1, a.poleCount(), "a disc has one inscribed circle");
+        assertEquals(1, b.poleCount());
+        for (double d : new double[] {0.5, 2, 4, 7.5}) {
+            PlacedShape pa = at(a, 0, 0, 0);
+            PlacedShape pb = at(b, d * 0.6, d * 0.8, 37);
+            // the discs' true centres (the local frame starts at the inscribed circle found to a tolerance)
+            double ax = -a.refX;
+            double ay = -a.refY;
+            double c = Math.cos(Math.toRadians(37));
+            double sn = Math.sin(Math.toRadians(37));
+            double bx = d * 0.6 + c * -b.refX - sn * -b.refY;
+            double by = d * 0.8 + sn * -b.refX + c * -b.refY;
+            double depth = (r1 + r2) * in - Math.hypot(bx - ax, by - ay);
+            // within the inscribed-circle tolerance (1e-3 of each disc's size)
+            assertEquals(depth, measure.overlap(pa, pb), 0.002 * (r1 + r2), "distance " + d);
+        }
+    }
+
+    @Test
+    void collisionAgreesWithJtsOnRandomPairs() {
+        Polygon ell = Shapes.wkt("POLYGON ((0 0, 8 0, 8 2, 2 2, 2 6, 0 6, 0 0))");
+        Polygon tri = Shapes.wkt("POLYGON ((0 0, 5 0, 1 4, 0 0))");
+        SearchShape a = SearchShape.of(ell, 0, 1e-9);
+        SearchShape b = SearchShape.of(tri, 0, 1e-9);
+        SplittableRandom rnd = new SplittableRandom(5);
+        int hits = 0;
+        for (int k = 0; k < 3000; k++) {
+            double ax = rnd.nextDouble() * 10;
+            double ay = rnd.nextDouble() * 10;
+            double aa = rnd.nextDouble() * 360;
+            double bx = rnd.nextDouble() * 10;
+            double by = rnd.nextDouble() * 10;
+            double ba = rnd.nextInt(4) * 90.0;
+            PlacedShape pa = at(a, ax, ay, aa);
+            PlacedShape pb = at(b, bx, by, ba);
+            Polygon ja = world(a, ax, ay, aa);
+            Polygon jb = world(b, bx, by, ba);
+            double area = ja.intersection(jb).getArea();
+            boolean ours = measure.overlap(pa, pb) > 0;
+            if (area > 1e-6) {
+                assertTrue(ours, "pair " + k + " overlaps by area " + area + " but was not seen");
+                hits++;
+            } else if (area == 0 && !ja.intersects(jb)) {
+                assertEquals(false, ours, "pair " + k + " is apart but was seen as colliding");
+            }
+        }
+        assertTrue(hits > 100, "the random pairs must include collisions, got " + hits);
+    }
+
+    private static Polygon world(SearchShape s, double x, double y, double angle) {
+        AffineTransformation t = new AffineTransformation().rotate(Math.toRadians(angle)).translate(x, y);
+        return (Polygon) t.transform(s.localPolygon());
+    }
+
+    static Polygon disc(double r, int n) {
+        org.locationtech.jts.geom.Coordinate[] cs = new org.locationtech.jts.geom.Coordinate[n + 1];
+        for (int i = 0; i < n; i++) {
+            double t = 2 * Math.PI * i / n;
+            cs[i] = new org.locationtech.jts.geom.Coordinate(r * Math.cos(t), r * Math.sin(t));
+        }
+        cs[n] = cs[0].copy();
+        return Shapes.GF.createPolygon(cs);
+    }
+}
