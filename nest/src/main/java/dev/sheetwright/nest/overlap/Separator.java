@@ -361,47 +361,29 @@ final class Separator {
             double bestY = y;
             double best = c;
             // sides of the bin, then of the pieces the candidate's box meets
-            double[] xs = {bx[0] - w0, bx[2] - w1};
-            double[] ys = {bx[1] - h0, bx[3] - h1};
-            for (double nx : xs) {
-                cand.set(sh, nx, y, a);
-                double nc = cost(i, cand, b, best);
-                if (nc < best) {
-                    best = nc;
-                    bestX = nx;
-                    bestY = y;
-                }
-            }
-            for (double ny : ys) {
-                cand.set(sh, x, ny, a);
-                double nc = cost(i, cand, b, best);
-                if (nc < best) {
-                    best = nc;
-                    bestX = x;
-                    bestY = ny;
-                }
-            }
+            java.util.List<double[]> slides = new java.util.ArrayList<>(java.util.List.of(new double[] {bx[0] - w0, y},
+                    new double[] {bx[2] - w1, y}, new double[] {x, bx[1] - h0}, new double[] {x, bx[3] - h1}));
             double minX = x + w0;
             double maxX = x + w1;
             double minY = y + h0;
             double maxY = y + h1;
             for (int j = 0; j < n; j++) {
-                if (j == i || bin[j] != b) {
-                    continue;
-                }
                 PlacedShape o = at[j];
-                if (o.maxX <= minX || o.minX >= maxX || o.maxY <= minY || o.minY >= maxY) {
+                if (j == i || bin[j] != b || o.maxX <= minX || o.minX >= maxX || o.maxY <= minY || o.minY >= maxY) {
                     continue;
                 }
-                double[][] slides = {{o.maxX - w0, y}, {o.minX - w1, y}, {x, o.maxY - h0}, {x, o.minY - h1}};
-                for (double[] sl : slides) {
-                    cand.set(sh, sl[0], sl[1], a);
-                    double nc = cost(i, cand, b, best);
-                    if (nc < best) {
-                        best = nc;
-                        bestX = sl[0];
-                        bestY = sl[1];
-                    }
+                slides.add(new double[] {o.maxX - w0, y});
+                slides.add(new double[] {o.minX - w1, y});
+                slides.add(new double[] {x, o.maxY - h0});
+                slides.add(new double[] {x, o.minY - h1});
+            }
+            for (double[] sl : slides) {
+                cand.set(sh, sl[0], sl[1], a);
+                double nc = cost(i, cand, b, best);
+                if (nc < best) {
+                    best = nc;
+                    bestX = sl[0];
+                    bestY = sl[1];
                 }
             }
             if (!(best < c)) {
