@@ -80,7 +80,8 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
      *
      * With {@code sheetSearch}, the no-fit-polygon engine makes the first layout in {@link #FIRST_LAYOUT_SHARE} of
      * the search time (with an iteration count: all its steps), then {@link SheetSearch} tries to empty sheets in
-     * the rest (with an iteration count: as many piece moves).
+     * the rest (with an iteration count: as many piece moves); when the sheet search does not apply (no sheets, or
+     * more than {@link SheetSearch#MAX_COPIES} copies) the first engine gets all the time.
      *
      * @throws IllegalArgumentException if a rack remnant has the id of a remnant the job lists
      */
@@ -113,7 +114,7 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
     }
 
     private static NestResult nest(NestRequest request, NestOptions options, boolean sheetSearch) {
-        if (!sheetSearch) {
+        if (!sheetSearch || !SheetSearch.applies(request)) {
             return Nester.nest(request, options);
         }
         long deadline = System.nanoTime() + Math.min(options.timeLimit().toNanos(), Long.MAX_VALUE / 4);

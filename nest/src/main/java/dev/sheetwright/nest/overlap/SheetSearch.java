@@ -38,6 +38,11 @@ import dev.sheetwright.nest.model.SheetLayout;
 public final class SheetSearch {
     /** The least overlap a collision counts as, as a share of the mean piece size. */
     static final double FLOOR_SHARE = 1e-3;
+    /**
+     * Most copies a request may have for the sheet search: the separator keeps two weights per pair of parts per
+     * worker (memory quadratic in the parts), and on larger jobs the first engine makes better use of the time.
+     */
+    public static final int MAX_COPIES = 1500;
     /** How many times each sheet may fail to be emptied before a worker gives up. */
     static final int TRIES_PER_SHEET = 2;
 
@@ -129,13 +134,18 @@ public final class SheetSearch {
         this.measure = new OverlapMeasure(Math.max(precision, meanReach * FLOOR_SHARE), precision);
     }
 
+    /** Whether the sheet search can work on {@code request}: some stock is a sheet, and not too many copies. */
+    public static boolean applies(NestRequest request) {
+        return request.totalCopies() <= MAX_COPIES && request.stock().stream().anyMatch(s -> s instanceof Sheet);
+    }
+
     /**
      * A nest of {@code request} with at most as many sheets as {@code start} (a feasible nest of it) and never a
      * higher stock cost, searched within {@code options} until {@code deadlineNanos} (a {@link System#nanoTime()}
      * value); improvements are told to the options' listener.
      */
     public static NestResult eliminate(NestRequest request, NestResult start, NestOptions options, long deadlineNanos) {
-        if (start.sheets().stream().filter(l -> l.stock() instanceof Sheet).count() < 2) {
+        if (!applies(request) || start.sheets().stream().filter(l -> l.stock() instanceof Sheet).count() < 2) {
             return start;
         }
         if (options.iterations().isPresent() && options.iterations().getAsLong() == 0) {
