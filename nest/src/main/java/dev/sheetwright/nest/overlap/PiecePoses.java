@@ -8,6 +8,7 @@ import org.locationtech.jts.geom.Polygon;
 import org.locationtech.jts.geom.util.AffineTransformation;
 
 import dev.sheetwright.nest.model.NestPiece;
+import dev.sheetwright.nest.model.NestRules;
 import dev.sheetwright.nest.model.Placement;
 import dev.sheetwright.nest.model.RotationRule;
 
@@ -28,6 +29,15 @@ final class PiecePoses {
         }
         this.grow = grow;
         this.precision = precision;
+    }
+
+    /**
+     * How far search shapes are grown past the outlines: half the gap, the chord allowance and the precision (with no
+     * gap: the chord allowance), so that search shapes apart keep the true outlines at least the gap apart.
+     */
+    static double growFor(NestRules rules, double precision) {
+        double gap = rules.gap();
+        return gap > 0 ? gap / 2 + rules.chordTolerance() + precision : rules.chordTolerance();
     }
 
     /** The piece a placement places. */

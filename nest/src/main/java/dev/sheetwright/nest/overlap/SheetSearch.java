@@ -77,8 +77,7 @@ public final class SheetSearch {
             }
         }
         this.precision = request.precision().checkTolerance(extent);
-        double grow = gap > 0 ? gap / 2 + request.rules().chordTolerance() + precision : request.rules().chordTolerance();
-        this.poses = new PiecePoses(request.pieces(), grow, precision);
+        this.poses = new PiecePoses(request.pieces(), PiecePoses.growFor(request.rules(), precision), precision);
         this.angles = AngleSet.of(request.rules().rotation());
         List<double[]> bx = new ArrayList<>();
         List<Boolean> fixedList = new ArrayList<>();

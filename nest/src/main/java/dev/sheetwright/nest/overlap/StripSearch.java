@@ -63,8 +63,8 @@ public final class StripSearch {
         this.startParts = start.sheets().get(0).parts();
         double gap = request.rules().gap();
         double margin = request.rules().margin();
-        this.grow = gap > 0 ? gap / 2 + request.rules().chordTolerance() + precisionOf(request, start) : request.rules().chordTolerance();
         this.precision = precisionOf(request, start);
+        this.grow = PiecePoses.growFor(request.rules(), precision);
         this.x0 = margin - gap / 2;
         this.y0 = margin - gap / 2;
         this.y1 = coil.width() - margin + gap / 2;
