@@ -95,6 +95,48 @@ class SheetSearchTest {
     }
 
     @Test
+    void aStepRuleGivesExactlyItsMultiples() {
+        NestRequest req = request(RotationRule.step(30), List.of(SHEET));
+        NestResult r = SheetSearch.eliminate(req, wasteful(List.of()), NestOptions.steps(3000, 9, 2), Long.MAX_VALUE);
+        assertTrue(sheetsOf(r) < 4);
+        for (SheetLayout l : r.sheets()) {
+            for (Placement p : l.parts()) {
+                double k = p.rotationDeg() / 30;
+                assertEquals(Math.rint(k), k, 1e-9, "angle " + p.rotationDeg() + " is a multiple of 30");
+                assertTrue(!p.mirrored(), "mirror is not allowed");
+            }
+        }
+        assertTrue(NestChecker.check(req, r).isEmpty(), "checker: " + NestChecker.check(req, r));
+    }
+
+    @Test
+    void aPartHoldingAnotherInItsHoleStaysWithItsGuest() {
+        List<NestPiece> pieces = List.of(
+                NestPiece.of("PL", "plate", 4, Shapes.rect(0, 0, 4, 3)),
+                NestPiece.of("FR", "frame", 1, Shapes.frame(6, 4)),
+                NestPiece.of("PG", "plug", 1, Shapes.rect(0, 0, 2, 2)));
+        List<Stock> stock = List.of(SHEET);
+        NestRequest req = new NestRequest(pieces, stock, new NestRules(0.25, 0.5, RotationRule.quarter(), false, 0.01),
+                NestPrecision.ofScale(NestPrecision.scaleOf(pieces, stock)));
+        Placement frame = new Placement("FR", "frame", 0, 0.5, 0.5, 0, false);
+        Placement plug = new Placement("PG", "plug", 0, 2.5, 2.5, 0, false);
+        List<SheetLayout> layouts = new ArrayList<>();
+        layouts.add(new SheetLayout(SHEET, 0, 11.5, List.of(frame, plug,
+                new Placement("PL", "plate", 0, 7, 0.5, 0, false)), null, 0.3));
+        for (int s = 1; s < 4; s++) {
+            layouts.add(new SheetLayout(SHEET, s, 4.5, List.of(new Placement("PL", "plate", s, 0.5, 0.5, 0, false)),
+                    null, 0.1));
+        }
+        NestResult start = new NestResult(layouts, List.of());
+        assertTrue(NestChecker.check(req, start).isEmpty(), "feasible start: " + NestChecker.check(req, start));
+        NestResult r = SheetSearch.eliminate(req, start, NestOptions.steps(3000, 4, 1), Long.MAX_VALUE);
+        assertTrue(sheetsOf(r) < 4);
+        assertTrue(NestChecker.check(req, r).isEmpty(), "checker: " + NestChecker.check(req, r));
+        SheetLayout withFrame = r.sheets().stream().filter(l -> l.parts().contains(frame)).findFirst().orElseThrow();
+        assertTrue(withFrame.parts().contains(plug), "the plug stays in the frame's hole, the frame where it was");
+    }
+
+    @Test
     void noStepsLeaveTheNestAsItWas() {
         NestRequest req = request(RotationRule.quarter(), List.of(SHEET));
         NestResult start = wasteful(List.of());
