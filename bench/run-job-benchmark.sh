@@ -5,8 +5,8 @@
 # side), lower bound ceil(area / usable), target (bound + 1), sheets used, wall seconds and whether the target is
 # met; then times a single sheet's worth of duct parts (fixtures/one-sheet-20.yaml, constructive pass only:
 # --iterations 0) and prints its wall seconds. Wall times include starting the JVM, developing the patterns and
-# writing the DXF/SVG/quote files. --nest-arg passes one more argument to every nest run (e.g. --no-sheet-search
-# to measure the first engine alone); --job (repeatable) replaces the fixture jobs.
+# writing the DXF/SVG/quote files. --nest-arg passes one more argument to every nest run (e.g. --sheet-search
+# to measure the first engine followed by sheet elimination); --job (repeatable) replaces the fixture jobs.
 #
 # usage: bench/run-job-benchmark.sh [--time 30] [--seed N] [--jar JAR] [--job FILE]... [--single FILE] [--runs N]
 #                                   [--nest-arg ARG]...

@@ -48,7 +48,7 @@ class AnyAngleNestTest {
         int firstSheets = new ObjectMapper().readTree(first.resolve("nest.json").toFile()).get("sheets").size();
 
         Path out = tmp.resolve("out");
-        CommandRun run = nest(job, out, "2");
+        CommandRun run = nest(job, out, "2", "--sheet-search");
         assertEquals(0, run.exitCode(), run::toString);
         JsonNode doc = new ObjectMapper().readTree(out.resolve("nest.json").toFile());
         assertEquals(0, doc.get("unplaced").size());
@@ -69,7 +69,7 @@ class AnyAngleNestTest {
         assertTrue(odd > 0, "some part lies at an angle that is not a quarter turn");
 
         Path again = tmp.resolve("again");
-        assertEquals(0, nest(job, again, "1").exitCode());
+        assertEquals(0, nest(job, again, "1", "--sheet-search").exitCode());
         assertEquals(Files.readString(out.resolve("nest.json")), Files.readString(again.resolve("nest.json")),
                 "the same nest on one thread and on two");
 

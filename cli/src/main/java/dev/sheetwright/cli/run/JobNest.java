@@ -69,9 +69,9 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
         return run(job, file, options, List.of());
     }
 
-    /** As {@link #run(Job, String, NestOptions, List, boolean)} with sheet elimination. */
+    /** As {@link #run(Job, String, NestOptions, List, boolean)} without sheet elimination (the default). */
     public static JobNest run(Job job, String file, NestOptions options, List<StockRemnant> rackRemnants) {
-        return run(job, file, options, rackRemnants, true);
+        return run(job, file, options, rackRemnants, false);
     }
 
     /**

@@ -147,7 +147,8 @@ public final class SheetSearch {
         if (!applies(request) || start.sheets().stream().filter(l -> l.stock() instanceof Sheet).count() < 2) {
             return start;
         }
-        if (options.iterations().isPresent() && options.iterations().getAsLong() == 0) {
+        boolean counted = options.iterations().isPresent();
+        if (counted ? options.iterations().getAsLong() == 0 : System.nanoTime() >= deadlineNanos) {
             return start;
         }
         return new SheetSearch(request, start).run(options, deadlineNanos);
