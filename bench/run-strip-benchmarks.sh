@@ -3,7 +3,7 @@
 # writes a Markdown table to bench/strip-results.md (or --out FILE).
 #
 # usage: bench/run-strip-benchmarks.sh [--times 10,60] [--seed N] [--dir DIR] [--jar JAR] [--only a,b] [--out FILE]
-#        [--overlap-search]   (the experimental overlap-minimising search after the first layout)
+#        [--no-overlap-search]   (bottom-left order search alone, without the overlap-minimising search)
 # CI smoke: bench/run-strip-benchmarks.sh --times 2 --only fu --out /tmp/strip-smoke.md
 set -euo pipefail
 
@@ -29,7 +29,7 @@ while [ $# -gt 0 ]; do
     --jar) jar="$2"; shift 2 ;;
     --only) only="$2"; shift 2 ;;
     --out) out="$2"; shift 2 ;;
-    --overlap-search) extra+=(--overlap-search); shift ;;
+    --overlap-search|--no-overlap-search) extra+=("$1"); shift ;;
     -h|--help) sed -n '2,7p' "$0"; exit 0 ;;
     *) echo "unknown argument: $1" >&2; exit 2 ;;
   esac

@@ -50,7 +50,9 @@ public final class BenchStripCommand implements Callable<Integer> {
     @Option(names = "--dxf", paramLabel = "OUT.dxf", description = "Also write the layout as DXF (CUT: parts, SHEET: strip).")
     Path dxf;
 
-    @Option(names = "--overlap-search", description = "Shorten the first layout with the overlap-minimising search (experimental).")
+    @Option(names = "--overlap-search", negatable = true, defaultValue = "true", fallbackValue = "true",
+            description = "Shorten the first layout with the overlap-minimising search (default; --no-overlap-search"
+                    + " keeps the bottom-left order search alone).")
     boolean overlapSearch;
 
     @Override
