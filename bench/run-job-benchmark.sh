@@ -1,11 +1,15 @@
 #!/usr/bin/env bash
-# Nests the ~300-piece duct job fixtures/riverside-300.yaml through the jar with a time limit and prints pieces,
-# total part area, usable sheet area (sheet minus margin on every side), lower bound ceil(area / usable), target
-# (bound + 1), sheets used, wall seconds and whether the target is met; then times a single sheet's worth of duct
-# parts (fixtures/one-sheet-20.yaml, constructive pass only: --iterations 0) and prints its wall seconds.
-# Wall times include starting the JVM, developing the patterns and writing the DXF/SVG/quote files.
+# Nests the duct job fixtures (the ~300-piece fixtures/riverside-300.yaml on 48 x 120 sheets and the ~170-piece
+# fixtures/harbour-hall-170.yaml of large sector blanks, gores and transitions on 60 x 120 sheets) through the jar
+# with a time limit and prints for each pieces, total part area, usable sheet area (sheet minus margin on every
+# side), lower bound ceil(area / usable), target (bound + 1), sheets used, wall seconds and whether the target is
+# met; then times a single sheet's worth of duct parts (fixtures/one-sheet-20.yaml, constructive pass only:
+# --iterations 0) and prints its wall seconds. Wall times include starting the JVM, developing the patterns and
+# writing the DXF/SVG/quote files. --nest-arg passes one more argument to every nest run (e.g. --sheet-search
+# to measure the first engine followed by sheet elimination); --job (repeatable) replaces the fixture jobs.
 #
-# usage: bench/run-job-benchmark.sh [--time 30] [--seed N] [--jar JAR] [--job FILE] [--single FILE] [--runs N]
+# usage: bench/run-job-benchmark.sh [--time 30] [--seed N] [--jar JAR] [--job FILE]... [--single FILE] [--runs N]
+#                                   [--nest-arg ARG]...
 set -euo pipefail
 
 here="$(cd "$(dirname "$0")" && pwd)"
@@ -14,7 +18,8 @@ time_s=30
 seed=1
 runs=1
 jar="$root/cli/target/sheetwright.jar"
-job="$root/fixtures/riverside-300.yaml"
+jobs=()
+nest_args=()
 single="$root/fixtures/one-sheet-20.yaml"
 java="${JAVA:-/usr/bin/java}"
 
@@ -23,10 +28,11 @@ while [ $# -gt 0 ]; do
     --time) time_s="$2"; shift 2 ;;
     --seed) seed="$2"; shift 2 ;;
     --jar) jar="$2"; shift 2 ;;
-    --job) job="$2"; shift 2 ;;
+    --job) jobs+=("$2"); shift 2 ;;
+    --nest-arg) nest_args+=("$2"); shift 2 ;;
     --single) single="$2"; shift 2 ;;
     --runs) runs="$2"; shift 2 ;;
-    -h|--help) sed -n '2,8p' "$0"; exit 0 ;;
+    -h|--help) sed -n '2,12p' "$0"; exit 0 ;;
     *) echo "unknown argument: $1" >&2; exit 2 ;;
   esac
 done
@@ -41,7 +47,7 @@ run_nest() {
   local out="$1"; shift
   local t0 t1 rc=0
   t0=$(date +%s.%N)
-  "$java" -jar "$jar" nest "$@" -o "$out" --seed "$seed" >"$out.log" 2>&1 || rc=$?
+  "$java" -jar "$jar" nest "$@" -o "$out" --seed "$seed" ${nest_args[@]+"${nest_args[@]}"} >"$out.log" 2>&1 || rc=$?
   t1=$(date +%s.%N)
   if [ "$rc" -ne 0 ] && [ "$rc" -ne 3 ]; then
     echo "nest failed (exit $rc):" >&2; cat "$out.log" >&2; exit 1
@@ -66,6 +72,8 @@ PY
 }
 
 echo "load: $(uptime | sed 's/.*load average/load average/')"
+[ ${#jobs[@]} -gt 0 ] || jobs=("$root/fixtures/riverside-300.yaml" "$root/fixtures/harbour-hall-170.yaml")
+for job in "${jobs[@]}"; do
 margin=$(margin_of "$job")
 for r in $(seq 1 "$runs"); do
   wall=$(run_nest "$work/job$r" "$job" --time "$time_s")
@@ -89,6 +97,7 @@ print(f"job {name} --time {limit}: pieces {pieces}, total part area {area:.1f}, 
       f"{', unplaced ' + str(unplaced) if unplaced else ''}, wall {wall:.2f} s, "
       f"target {'met' if met else 'NOT met'} (sheets <= target, nothing unplaced, wall <= time + 10 s)")
 PY
+done
 done
 for r in $(seq 1 "$runs"); do
   wall=$(run_nest "$work/single$r" "$single" --iterations 0)

@@ -5,6 +5,7 @@ import dev.sheetwright.cli.ExitCodes;
 import dev.sheetwright.cli.mixin.InventoryOption;
 import dev.sheetwright.cli.mixin.JobFileOption;
 import dev.sheetwright.cli.mixin.SearchOptions;
+import dev.sheetwright.cli.mixin.SheetSearchOption;
 import dev.sheetwright.cli.mixin.ShopOption;
 import dev.sheetwright.cli.output.JsonFiles;
 import dev.sheetwright.cli.output.NestJson;
@@ -68,6 +69,9 @@ public final class NestCommand implements Callable<Integer> {
 
     @Mixin
     SearchOptions search;
+
+    @Mixin
+    SheetSearchOption sheetSearch;
 
     @Option(names = "--use-remnants",
             description = "cut from the rack first: every available remnant of the job's material and gauge (or"
@@ -146,7 +150,7 @@ public final class NestCommand implements Callable<Integer> {
             JobNest nest;
             try (Progress progress = Progress.forTerminal(err, seconds, Progress.coilOnly(job))) {
                 NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
-                nest = JobNest.run(job, jobFile.label(), options, fromRack);
+                nest = JobNest.run(job, jobFile.label(), options, fromRack, sheetSearch.on());
             }
             CutPlans cuts = CutPlans.of(nest, file.cutPath());
             RackPlan plan = rack == null ? null : rack.settle(nest, min);

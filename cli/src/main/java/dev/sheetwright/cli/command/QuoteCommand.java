@@ -4,6 +4,7 @@ import dev.sheetwright.cli.Cautions;
 import dev.sheetwright.cli.ExitCodes;
 import dev.sheetwright.cli.mixin.JobFileOption;
 import dev.sheetwright.cli.mixin.SearchOptions;
+import dev.sheetwright.cli.mixin.SheetSearchOption;
 import dev.sheetwright.cli.mixin.ShopOption;
 import dev.sheetwright.cli.output.OutputFolder;
 import dev.sheetwright.cli.output.QuoteText;
@@ -15,6 +16,7 @@ import dev.sheetwright.core.quote.Quote;
 import dev.sheetwright.core.quote.ShopSettings;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -45,6 +47,9 @@ public final class QuoteCommand implements Callable<Integer> {
     SearchOptions search;
 
     @Mixin
+    SheetSearchOption sheetSearch;
+
+    @Mixin
     ShopOption shop;
 
     @Override
@@ -58,7 +63,8 @@ public final class QuoteCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         JobNest nest;
         try (Progress progress = Progress.forTerminal(err, seconds, Progress.coilOnly(job))) {
-            nest = JobNest.run(job, jobFile.label(), search.nestOptions(DEFAULT_SECONDS, progress));
+            nest = JobNest.run(job, jobFile.label(), search.nestOptions(DEFAULT_SECONDS, progress), List.of(),
+                    sheetSearch.on());
         }
         Quote q;
         if (out != null) {

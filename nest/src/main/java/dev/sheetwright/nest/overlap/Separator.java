@@ -4,7 +4,7 @@ import java.util.SplittableRandom;
 
 /**
  * Removes the overlap of a layout by guided local search. Pieces live in rectangular bins (a strip cut to length; a
- * piece may move to any open bin, for sheets, though only the strip search uses one bin so far); pieces in one bin must not collide and must stay inside it. One overlapping piece at a time moves to the
+ * piece may move to any open bin: the sheet search uses one bin per sheet); pieces in one bin must not collide and must stay inside it. One overlapping piece at a time moves to the
  * position, bin and rotation that minimise its weighted overlap (samples over every bin and around the current
  * position, the best refined by coordinate descent); the weight of a pair that keeps overlapping grows, and decays
  * when they are apart. A run ends when the overlap is zero, or after {@link #STRIKES} rounds without progress.
@@ -34,6 +34,14 @@ final class Separator {
     double[][] boxes;
     /** Bins a piece may move to (a strip has one). */
     boolean[] open;
+    /** Pieces that never move (e.g. a part holding others in its holes). */
+    final boolean[] fixed;
+    /**
+     * Pieces still where the caller placed them in a layout known to be feasible: two such pieces (or one and a
+     * fixed piece) never count as overlapping, nor does such a piece sticking out of its bin, since their search
+     * shapes are larger than the true outlines. A settled piece that moves is settled no more.
+     */
+    final boolean[] settled;
     private final double[][] pair;
     private final double[][] weight;
     private final double[] out;
@@ -55,6 +63,8 @@ final class Separator {
             at[i] = new PlacedShape();
         }
         this.bin = new int[n];
+        this.fixed = new boolean[n];
+        this.settled = new boolean[n];
         this.boxes = boxes;
         this.open = new boolean[boxes.length];
         java.util.Arrays.fill(open, true);
@@ -84,13 +94,23 @@ final class Separator {
     /** Recomputes every overlap (after pieces were placed or bins changed). */
     void refresh() {
         for (int i = 0; i < n; i++) {
-            out[i] = outsideOf(at[i], bin[i]);
+            out[i] = asGiven(i) ? 0 : outsideOf(at[i], bin[i]);
             for (int j = i + 1; j < n; j++) {
-                double o = bin[i] == bin[j] ? measure.overlap(at[i], at[j]) : 0;
+                double o = counts(i, j) ? measure.overlap(at[i], at[j]) : 0;
                 pair[i][j] = o;
                 pair[j][i] = o;
             }
         }
+    }
+
+    /** Whether piece i is placed as the caller's feasible layout has it (fixed or settled). */
+    private boolean asGiven(int i) {
+        return fixed[i] || settled[i];
+    }
+
+    /** Whether the overlap of pieces i and j counts: they share a bin and are not both as given. */
+    private boolean counts(int i, int j) {
+        return bin[i] == bin[j] && !(asGiven(i) && asGiven(j));
     }
 
     void resetWeights() {
@@ -133,12 +153,21 @@ final class Separator {
 
     /** Weighted overlap of piece i placed as {@code s} in bin b; stops early once above {@code limit}. */
     private double cost(int i, PlacedShape s, int b, double limit) {
-        double c = outWeight[i] * outsideOf(s, b);
+        return cost(i, s, b, limit, false);
+    }
+
+    /**
+     * As {@link #cost(int, PlacedShape, int, double)}; with {@code staying}, s is where piece i is, and what the
+     * settled layout forgives it (see {@link #settled}) does not count.
+     */
+    private double cost(int i, PlacedShape s, int b, double limit, boolean staying) {
+        boolean forgiven = staying && asGiven(i);
+        double c = forgiven ? 0 : outWeight[i] * outsideOf(s, b);
         if (c > limit) {
             return c;
         }
         for (int j = 0; j < n; j++) {
-            if (j == i || bin[j] != b) {
+            if (j == i || bin[j] != b || (forgiven && asGiven(j))) {
                 continue;
             }
             double o = measure.overlap(s, at[j]);
@@ -163,8 +192,11 @@ final class Separator {
     }
 
     private boolean move(int i, boolean away) {
+        if (fixed[i]) {
+            return false;
+        }
         moves++;
-        double bestCost = away ? Double.POSITIVE_INFINITY : cost(i, at[i], bin[i], Double.POSITIVE_INFINITY);
+        double bestCost = away ? Double.POSITIVE_INFINITY : cost(i, at[i], bin[i], Double.POSITIVE_INFINITY, true);
         if (bestCost == 0) {
             return false;
         }
@@ -215,6 +247,7 @@ final class Separator {
             return false;
         }
         place(i, (int) best[0], best[1], best[2], best[3]);
+        settled[i] = false;
         update(i);
         return true;
     }
@@ -365,12 +398,12 @@ final class Separator {
 
     /** Recomputes the overlaps of piece i after it moved. */
     void update(int i) {
-        out[i] = outsideOf(at[i], bin[i]);
+        out[i] = asGiven(i) ? 0 : outsideOf(at[i], bin[i]);
         for (int j = 0; j < n; j++) {
             if (j == i) {
                 continue;
             }
-            double o = bin[i] == bin[j] ? measure.overlap(at[i], at[j]) : 0;
+            double o = counts(i, j) ? measure.overlap(at[i], at[j]) : 0;
             pair[i][j] = o;
             pair[j][i] = o;
         }
@@ -397,11 +430,11 @@ final class Separator {
         }
     }
 
-    /** Where every piece is, to put back later. */
+    /** Where every piece is (bin, x, y, angle, 1 when settled), to put back later. */
     double[][] snapshot() {
         double[][] s = new double[n][];
         for (int i = 0; i < n; i++) {
-            s[i] = new double[] {bin[i], at[i].x, at[i].y, at[i].angle};
+            s[i] = new double[] {bin[i], at[i].x, at[i].y, at[i].angle, settled[i] ? 1 : 0};
         }
         return s;
     }
@@ -409,6 +442,7 @@ final class Separator {
     void restore(double[][] s) {
         for (int i = 0; i < n; i++) {
             place(i, (int) s[i][0], s[i][1], s[i][2], s[i][3]);
+            settled[i] = s[i][4] != 0;
         }
         refresh();
     }
@@ -441,7 +475,7 @@ final class Separator {
                 }
                 int m = 0;
                 for (int i = 0; i < n; i++) {
-                    if (overlapOf(i) > 0) {
+                    if (!fixed[i] && overlapOf(i) > 0) {
                         order[m++] = i;
                     }
                 }
@@ -452,6 +486,10 @@ final class Separator {
                     order[j] = t;
                 }
                 for (int k = 0; k < m; k++) {
+                    if (budget.spent(moves)) {
+                        restore(best);
+                        return false;
+                    }
                     if (overlapOf(order[k]) > 0) {
                         move(order[k]);
                     }

@@ -1,23 +1,15 @@
 package dev.sheetwright.nest.overlap;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.SplittableRandom;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Polygon;
-import org.locationtech.jts.geom.util.AffineTransformation;
 
 import dev.sheetwright.nest.check.NestChecker;
 import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.NestOptions;
-import dev.sheetwright.nest.model.NestPiece;
 import dev.sheetwright.nest.model.NestPrecision;
 import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestResult;
@@ -48,11 +40,10 @@ public final class StripSearch {
 
     private final NestRequest request;
     private final NestResult start;
-    private final Map<String, NestPiece> byLabel = new HashMap<>();
+    private final PiecePoses poses;
     private final Coil coil;
     private final List<Placement> startParts;
     private final SearchShape[] shapes;
-    private final boolean[] mirrored;
     private final double grow;
     private final double precision;
     private final OverlapMeasure measure;
@@ -72,27 +63,19 @@ public final class StripSearch {
         this.startParts = start.sheets().get(0).parts();
         double gap = request.rules().gap();
         double margin = request.rules().margin();
-        this.grow = gap > 0 ? gap / 2 + request.rules().chordTolerance() + precisionOf(request, start) : request.rules().chordTolerance();
         this.precision = precisionOf(request, start);
+        this.grow = PiecePoses.growFor(request.rules(), precision);
         this.x0 = margin - gap / 2;
         this.y0 = margin - gap / 2;
         this.y1 = coil.width() - margin + gap / 2;
         this.angles = AngleSet.of(request.rules().rotation());
-        for (NestPiece p : request.pieces()) {
-            byLabel.put(p.label(), p);
-        }
-        Map<String, SearchShape> cache = new HashMap<>();
+        this.poses = new PiecePoses(request.pieces(), grow, precision);
         int n = startParts.size();
         this.shapes = new SearchShape[n];
-        this.mirrored = new boolean[n];
         double reach = 0;
         for (int i = 0; i < n; i++) {
             Placement p = startParts.get(i);
-            mirrored[i] = p.mirrored();
-            String key = p.label() + (p.mirrored() ? "\u0000m" : "");
-            Polygon shape = byLabel.get(p.label()).shape();
-            Polygon oriented = p.mirrored() ? (Polygon) AffineTransformation.scaleInstance(-1, 1).transform(shape) : shape;
-            shapes[i] = cache.computeIfAbsent(key, k -> SearchShape.of(oriented, grow, precision));
+            shapes[i] = poses.shape(p);
             reach += shapes[i].reach;
         }
         double meanReach = n > 0 ? reach / n : 1;
@@ -132,32 +115,8 @@ public final class StripSearch {
         boolean counted = options.iterations().isPresent();
         int workers = counted ? FIXED_WORKERS : options.threads();
         long perWorker = counted ? Math.max(1, options.iterations().getAsLong() / workers) : Long.MAX_VALUE;
-        List<double[][]> results = new ArrayList<>();
-        ExecutorService ex = Executors.newFixedThreadPool(Math.min(workers, options.threads()), r -> {
-            Thread t = new Thread(r, "strip-search");
-            t.setDaemon(true);
-            return t;
-        });
-        try {
-            List<Future<double[][]>> fs = new ArrayList<>();
-            for (int w = 0; w < workers; w++) {
-                long seed = options.seed() * 0x9E3779B97F4A7C15L + (w + 1) * 0xD1B54A32D192ED03L;
-                fs.add(ex.submit(() -> new Worker(seed, new Separator.Budget(deadline, perWorker), counted).call()));
-            }
-            for (Future<double[][]> f : fs) {
-                results.add(f.get());
-            }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("strip search was interrupted", e);
-        } catch (ExecutionException e) {
-            if (e.getCause() instanceof RuntimeException re) {
-                throw re;
-            }
-            throw new IllegalStateException(e.getCause());
-        } finally {
-            ex.shutdownNow();
-        }
+        List<double[][]> results = LogicalWorkers.run("strip-search", workers, options.threads(), options.seed(),
+                seed -> () -> new Worker(seed, new Separator.Budget(deadline, perWorker), counted).call());
         // the shortest checked layout, ties to the lowest worker
         NestResult best = start;
         double bestLength = start.sheets().get(0).usedLength();
@@ -181,17 +140,9 @@ public final class StripSearch {
         double maxX = Double.NEGATIVE_INFINITY;
         double area = 0;
         for (int i = 0; i < poses.length; i++) {
-            Placement old = startParts.get(i);
-            SearchShape s = shapes[i];
-            double a = poses[i][3];
-            double c = Turn.cos(a);
-            double sn = Turn.sin(a);
-            double tx = poses[i][1] - (c * s.refX - sn * s.refY);
-            double ty = poses[i][2] - (sn * s.refX + c * s.refY);
-            double angle = dev.sheetwright.nest.model.RotationRule.normalize(a);
-            Placement p = new Placement(old.fitting(), old.piece(), old.copy(), tx, ty, angle, mirrored[i]);
+            Placement p = PiecePoses.placement(startParts.get(i), shapes[i], poses[i][1], poses[i][2], poses[i][3]);
             parts.add(p);
-            Polygon shape = byLabel.get(p.label()).shape();
+            Polygon shape = this.poses.piece(p).shape();
             Envelope e = p.apply(shape).getEnvelopeInternal();
             maxX = Math.max(maxX, e.getMaxX());
             area += shape.getArea();
@@ -237,10 +188,8 @@ public final class StripSearch {
         double[][] call() {
             for (int i = 0; i < sep.n; i++) {
                 Placement p = startParts.get(i);
-                SearchShape s = shapes[i];
-                double c = Turn.cos(p.rotationDeg());
-                double sn = Turn.sin(p.rotationDeg());
-                sep.place(i, 0, p.x() + c * s.refX - sn * s.refY, p.y() + sn * s.refX + c * s.refY, p.rotationDeg());
+                double[] ref = PiecePoses.reference(p, shapes[i]);
+                sep.place(i, 0, ref[0], ref[1], p.rotationDeg());
             }
             double length = usedLength();
             sep.boxes[0][2] = length;
