@@ -91,11 +91,11 @@ bound = math.ceil(area / usable - 1e-9)
 target = bound + 1
 used = len(sheets)
 unplaced = len(nest.get("unplaced") or [])
-met = used <= target and unplaced == 0 and wall <= float(limit) + 10
+met = used <= target and unplaced == 0 and wall <= float(limit) + 5
 print(f"job {name} --time {limit}: pieces {pieces}, total part area {area:.1f}, usable sheet area {usable:.2f} "
       f"({w:g} x {h:g} minus margin {margin:g}), bound {bound}, target {target}, sheets used {used}"
       f"{', unplaced ' + str(unplaced) if unplaced else ''}, wall {wall:.2f} s, "
-      f"target {'met' if met else 'NOT met'} (sheets <= target, nothing unplaced, wall <= time + 10 s)")
+      f"target {'met' if met else 'NOT met'} (sheets <= target, nothing unplaced, wall <= time + 5 s)")
 PY
 done
 done
