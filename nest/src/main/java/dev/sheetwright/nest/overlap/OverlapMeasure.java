@@ -15,6 +15,18 @@ final class OverlapMeasure {
     private final double floor;
     private final double slack;
 
+    /** The least overlap a collision counts as in a search, as a share of the mean piece size. */
+    static final double FLOOR_SHARE = 1e-3;
+
+    /**
+     * The measure a search uses for pieces of mean size {@code meanReach}: a collision counts at least
+     * {@link #FLOOR_SHARE} of that size (never less than {@code precision}), and edges may touch within
+     * {@code precision}.
+     */
+    static OverlapMeasure forPieces(double meanReach, double precision) {
+        return new OverlapMeasure(Math.max(precision, meanReach * FLOOR_SHARE), precision);
+    }
+
     /**
      * {@code floor}: the least overlap a collision counts as (a small length, > 0); {@code slack}: how far an edge may
      * cross another and still count as touching (the search's precision, >= 0; callers grow shapes by as much).

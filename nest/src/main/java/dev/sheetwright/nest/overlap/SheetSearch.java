@@ -36,8 +36,6 @@ import dev.sheetwright.nest.model.SheetLayout;
  * that passes {@link NestChecker} is returned, else the given nest.
  */
 public final class SheetSearch {
-    /** The least overlap a collision counts as, as a share of the mean piece size. */
-    static final double FLOOR_SHARE = 1e-3;
     /**
      * Most copies a request may have for the sheet search: the separator keeps two weights per pair of parts per
      * worker (memory quadratic in the parts), and on larger jobs the first engine makes better use of the time.
@@ -130,7 +128,7 @@ public final class SheetSearch {
             reach += shapes[i].reach;
         }
         double meanReach = n > 0 ? reach / n : 1;
-        this.measure = new OverlapMeasure(Math.max(precision, meanReach * FLOOR_SHARE), precision);
+        this.measure = OverlapMeasure.forPieces(meanReach, precision);
     }
 
     /** Whether the sheet search can work on {@code request}: some stock is a sheet, and not too many copies. */

@@ -32,8 +32,6 @@ public final class StripSearch {
     /** First cut of the strip, as a share of its length. */
     static final double FIRST_CUT = 0.02;
     static final double SMALLEST_CUT = 0.002;
-    /** The least overlap a collision counts as, as a share of the mean piece size. */
-    static final double FLOOR_SHARE = 1e-3;
     /** Share of the run after which the strip is cut in small steps only. */
     static final double COMPRESS_AT = 0.8;
     static final int FAILS_BEFORE_SMALLER_CUT = 2;
@@ -79,7 +77,7 @@ public final class StripSearch {
             reach += shapes[i].reach;
         }
         double meanReach = n > 0 ? reach / n : 1;
-        this.measure = new OverlapMeasure(Math.max(precision, meanReach * FLOOR_SHARE), precision);
+        this.measure = OverlapMeasure.forPieces(meanReach, precision);
     }
 
     /**
