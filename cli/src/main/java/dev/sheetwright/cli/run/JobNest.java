@@ -10,9 +10,7 @@ import dev.sheetwright.nest.check.NestChecker;
 import dev.sheetwright.nest.check.Violation;
 import dev.sheetwright.nest.jobs.CleanOffcut;
 import dev.sheetwright.nest.jobs.JobNestRequest;
-import dev.sheetwright.nest.model.NestFailure;
 import dev.sheetwright.nest.model.NestOptions;
-import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestResult;
 import dev.sheetwright.nest.model.Offcut;
 import dev.sheetwright.nest.model.SheetLayout;
@@ -24,7 +22,6 @@ import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.OptionalLong;
 import java.util.Set;
 import java.util.stream.Collectors;
 
@@ -62,9 +59,6 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
                 .orElse(Duration.ZERO);
     }
 
-    /** Share of a timed search the first layout (the no-fit-polygon engine) gets before sheet elimination. */
-    static final double FIRST_LAYOUT_SHARE = 0.5;
-
     public static JobNest run(Job job, String file, NestOptions options) {
         return run(job, file, options, List.of());
     }
@@ -78,10 +72,8 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
      * As {@link #run(Job, String, NestOptions)}, with {@code rackRemnants} (job units) offered after the job's own
      * remnants and before its sheets.
      *
-     * With {@code sheetSearch}, the no-fit-polygon engine makes the first layout in {@link #FIRST_LAYOUT_SHARE} of
-     * the search time (with an iteration count: all its steps), then {@link SheetSearch} tries to empty sheets in
-     * the rest (with an iteration count: as many piece moves); when the sheet search does not apply (no sheets, or
-     * more than {@link SheetSearch#MAX_COPIES} copies) the first engine gets all the time.
+     * With {@code sheetSearch}, {@link SheetSearch#nest} nests it (first layout, then sheet elimination), else
+     * {@link Nester#nest}.
      *
      * @throws IllegalArgumentException if a rack remnant has the id of a remnant the job lists
      */
@@ -99,7 +91,7 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
                 job.tolerance());
         NestOptions timed = options.reserving(sinceStart().plus(HANDOVER_FIXED)
                 .plus(HANDOVER_PER_PIECE.multipliedBy(plan.request().totalCopies())));
-        NestResult result = nest(plan.request(), timed, sheetSearch);
+        NestResult result = sheetSearch ? SheetSearch.nest(plan.request(), timed) : Nester.nest(plan.request(), timed);
         List<Violation> violations = NestChecker.check(plan.request(), result);
         if (!violations.isEmpty()) {
             throw new IllegalStateException("the nest failed its independent check (a bug; nothing was written): "
@@ -111,22 +103,6 @@ public record JobNest(Job job, List<Development> developments, JobNestRequest pl
                     .ifPresent(o -> offcuts.put(s.index(), o));
         }
         return new JobNest(job, developments, plan, result, offcuts);
-    }
-
-    private static NestResult nest(NestRequest request, NestOptions options, boolean sheetSearch) {
-        if (!sheetSearch || !SheetSearch.applies(request)) {
-            return Nester.nest(request, options);
-        }
-        long deadline = System.nanoTime() + Math.min(options.timeLimit().toNanos(), Long.MAX_VALUE / 4);
-        NestOptions first = options.iterations().isPresent() ? options
-                : new NestOptions(Duration.ofNanos((long) (options.timeLimit().toNanos() * FIRST_LAYOUT_SHARE)),
-                        OptionalLong.empty(), options.seed(), options.threads(), options.listener());
-        NestResult start = Nester.nest(request, first);
-        try {
-            return SheetSearch.eliminate(request, start, options, deadline);
-        } catch (RuntimeException | OutOfMemoryError e) {
-            throw new NestFailure("the sheet search failed (a bug; nothing was written): " + e, e);
-        }
     }
 
     private static Stock withRack(Job job, String file, List<StockRemnant> rackRemnants) {

@@ -48,6 +48,21 @@ public record NestOptions(Duration timeLimit, OptionalLong iterations, long seed
         return new NestOptions(limit, iterations, seed, threads, listener);
     }
 
+    /**
+     * The same options with {@code fraction} (in (0, 1]) of a timed run's limit, for the first stage of a search
+     * that runs in stages; a run of fixed steps is unchanged.
+     */
+    public NestOptions share(double fraction) {
+        if (!(fraction > 0 && fraction <= 1)) {
+            throw new IllegalArgumentException("fraction must be in (0, 1], got " + fraction);
+        }
+        if (iterations.isPresent()) {
+            return this;
+        }
+        return new NestOptions(Duration.ofNanos((long) (timeLimit.toNanos() * fraction)), iterations, seed, threads,
+                listener);
+    }
+
     /** Only the constructive pass, no improvement search. */
     public static NestOptions constructiveOnly() {
         return steps(0, 0, 1);

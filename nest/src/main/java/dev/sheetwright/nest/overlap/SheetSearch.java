@@ -10,12 +10,14 @@ import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.Polygon;
 
 import dev.sheetwright.nest.check.NestChecker;
+import dev.sheetwright.nest.model.NestFailure;
 import dev.sheetwright.nest.model.NestOptions;
 import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestResult;
 import dev.sheetwright.nest.model.Placement;
 import dev.sheetwright.nest.model.Sheet;
 import dev.sheetwright.nest.model.SheetLayout;
+import dev.sheetwright.nest.place.Nester;
 
 /**
  * Sheet elimination: takes a feasible nest on sheets (and remnants) and tries again and again to empty one sheet.
@@ -129,6 +131,30 @@ public final class SheetSearch {
         }
         double meanReach = n > 0 ? reach / n : 1;
         this.measure = OverlapMeasure.forPieces(meanReach, precision);
+    }
+
+    /** Share of a timed search the first layout (the no-fit-polygon engine) gets before sheet elimination. */
+    public static final double FIRST_LAYOUT_SHARE = 0.5;
+
+    /**
+     * A nest of {@code request} in two stages: the no-fit-polygon engine ({@link Nester}) makes the first layout in
+     * {@link #FIRST_LAYOUT_SHARE} of the time (with an iteration count: all its steps), then {@link #eliminate} tries
+     * to empty sheets in the rest (with an iteration count: as many piece moves). When the sheet search does not
+     * apply (no sheets, or more than {@link #MAX_COPIES} copies) the first engine gets all the time.
+     *
+     * @throws NestFailure if the sheet search fails (a bug)
+     */
+    public static NestResult nest(NestRequest request, NestOptions options) {
+        if (!applies(request)) {
+            return Nester.nest(request, options);
+        }
+        long deadline = System.nanoTime() + Math.min(options.timeLimit().toNanos(), Long.MAX_VALUE / 4);
+        NestResult start = Nester.nest(request, options.share(FIRST_LAYOUT_SHARE));
+        try {
+            return eliminate(request, start, options, deadline);
+        } catch (RuntimeException | OutOfMemoryError e) {
+            throw new NestFailure("the sheet search failed (a bug; nothing was written): " + e, e);
+        }
     }
 
     /** Whether the sheet search can work on {@code request}: some stock is a sheet, and not too many copies. */
