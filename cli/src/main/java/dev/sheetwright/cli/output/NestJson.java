@@ -3,11 +3,8 @@ package dev.sheetwright.cli.output;
 import dev.sheetwright.cli.Cautions;
 import dev.sheetwright.cli.rack.RackPlan;
 import dev.sheetwright.cli.run.JobNest;
-import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.Offcut;
 import dev.sheetwright.nest.model.Placement;
-import dev.sheetwright.nest.model.Remnant;
-import dev.sheetwright.nest.model.Sheet;
 import dev.sheetwright.nest.model.SheetLayout;
 import dev.sheetwright.nest.model.Unplaced;
 import java.util.ArrayList;
@@ -43,21 +40,11 @@ public final class NestJson {
         for (SheetLayout s : nest.result().sheets()) {
             Map<String, Object> e = new LinkedHashMap<>();
             e.put("index", s.index() + 1);
-            Map<String, Object> stock = new LinkedHashMap<>();
-            if (s.stock() instanceof Sheet sh) {
-                stock.put("name", sh.name());
-                stock.put("width", sh.width());
-                stock.put("height", sh.height());
-            } else if (s.stock() instanceof Remnant r) {
-                stock.put("id", r.id());
-                stock.put("width", r.outline().getEnvelopeInternal().getWidth());
-                stock.put("height", r.outline().getEnvelopeInternal().getHeight());
-            } else if (s.stock() instanceof Coil c) {
-                stock.put("name", c.name());
-                stock.put("width", s.usedLength());
-                stock.put("height", c.width());
-            }
-            e.put("stock", stock);
+            e.put("stock", s.stock().match(
+                    sh -> stockEntry("name", sh.name(), sh.width(), sh.height()),
+                    r -> stockEntry("id", r.id(), r.outline().getEnvelopeInternal().getWidth(),
+                            r.outline().getEnvelopeInternal().getHeight()),
+                    c -> stockEntry("name", c.name(), s.usedLength(), c.width())));
             e.put("file", sheetFile(s) + ".dxf");
             e.put("utilization", s.utilization());
             List<Object> parts = new ArrayList<>();
@@ -112,5 +99,14 @@ public final class NestJson {
         doc.put("plan", rack == null ? null : rack.toJson());
         doc.put("cautions", Cautions.ALL);
         return doc;
+    }
+
+    /** A stock entry of nest.json: its name (or id) and its width and height. */
+    private static Map<String, Object> stockEntry(String key, String value, double width, double height) {
+        Map<String, Object> stock = new LinkedHashMap<>();
+        stock.put(key, value);
+        stock.put("width", width);
+        stock.put("height", height);
+        return stock;
     }
 }

@@ -17,11 +17,8 @@ import dev.sheetwright.dxf.Text;
 import dev.sheetwright.dxf.Vertex;
 import dev.sheetwright.nest.jobs.JobNestRequest;
 import dev.sheetwright.nest.jobs.PatternShapes;
-import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.Offcut;
 import dev.sheetwright.nest.model.Placement;
-import dev.sheetwright.nest.model.Remnant;
-import dev.sheetwright.nest.model.Sheet;
 import dev.sheetwright.nest.model.SheetLayout;
 import java.util.ArrayList;
 import java.util.List;
@@ -159,24 +156,21 @@ public final class SheetDrawings {
     }
 
     static Polyline stockOutline(SheetLayout sheet) {
-        List<Vertex> vs = new ArrayList<>();
-        if (sheet.stock() instanceof Sheet s) {
-            rectangle(vs, s.width(), s.height());
-        } else if (sheet.stock() instanceof Coil c) {
-            rectangle(vs, sheet.usedLength(), c.width());
-        } else if (sheet.stock() instanceof Remnant r) {
-            Coordinate[] cs = r.outline().getExteriorRing().getCoordinates();
-            for (int i = 0; i < cs.length - 1; i++) {
-                vs.add(Vertex.of(cs[i].x, cs[i].y));
-            }
-        }
+        List<Vertex> vs = sheet.stock().match(
+                s -> rectangle(s.width(), s.height()),
+                r -> {
+                    Coordinate[] cs = r.outline().getExteriorRing().getCoordinates();
+                    List<Vertex> ring = new ArrayList<>();
+                    for (int i = 0; i < cs.length - 1; i++) {
+                        ring.add(Vertex.of(cs[i].x, cs[i].y));
+                    }
+                    return ring;
+                },
+                c -> rectangle(sheet.usedLength(), c.width()));
         return new Polyline(PatternDrawings.SHEET, vs, true);
     }
 
-    private static void rectangle(List<Vertex> vs, double w, double h) {
-        vs.add(Vertex.of(0, 0));
-        vs.add(Vertex.of(w, 0));
-        vs.add(Vertex.of(w, h));
-        vs.add(Vertex.of(0, h));
+    private static List<Vertex> rectangle(double w, double h) {
+        return List.of(Vertex.of(0, 0), Vertex.of(w, 0), Vertex.of(w, h), Vertex.of(0, h));
     }
 }

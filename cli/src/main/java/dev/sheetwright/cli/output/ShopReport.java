@@ -12,10 +12,7 @@ import dev.sheetwright.core.job.Job;
 import dev.sheetwright.core.quote.Quote;
 import dev.sheetwright.core.units.FractionFormat;
 import dev.sheetwright.dxf.Drawing;
-import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.Placement;
-import dev.sheetwright.nest.model.Remnant;
-import dev.sheetwright.nest.model.Sheet;
 import dev.sheetwright.nest.model.SheetLayout;
 import dev.sheetwright.nest.model.Unplaced;
 import java.util.ArrayList;
@@ -158,13 +155,11 @@ public record ShopReport(String title, List<String> facts, List<String[]> totals
     }
 
     private static String stockText(SheetLayout s, String u) {
-        if (s.stock() instanceof Sheet sh) {
-            return "sheet " + sh.name() + " (" + trim(sh.width()) + " x " + trim(sh.height()) + " " + u + ")";
-        } else if (s.stock() instanceof Remnant r) {
-            return "remnant " + r.id();
-        }
-        Coil c = (Coil) s.stock();
-        return "coil " + trim(c.width()) + " " + u + ", " + QuoteText.num(s.usedLength(), 2) + " " + u + " used";
+        return s.stock().match(
+                sh -> "sheet " + sh.name() + " (" + trim(sh.width()) + " x " + trim(sh.height()) + " " + u + ")",
+                r -> "remnant " + r.id(),
+                c -> "coil " + trim(c.width()) + " " + u + ", " + QuoteText.num(s.usedLength(), 2) + " " + u
+                        + " used");
     }
 
     private static String trim(double v) {

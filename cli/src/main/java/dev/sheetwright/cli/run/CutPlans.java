@@ -4,10 +4,7 @@ import dev.sheetwright.core.cutpath.CutPathSettings;
 import dev.sheetwright.core.cutpath.CutPlanner;
 import dev.sheetwright.core.cutpath.SheetCutPlan;
 import dev.sheetwright.core.geom.Box2;
-import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.Placement;
-import dev.sheetwright.nest.model.Remnant;
-import dev.sheetwright.nest.model.Sheet;
 import dev.sheetwright.nest.model.SheetLayout;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -54,12 +51,12 @@ public record CutPlans(CutPathSettings settings, Map<Integer, SheetCutPlan> bySh
 
     /** The stock's extent in sheet coordinates: no pierce lies outside it. */
     static Box2 stockBox(SheetLayout s) {
-        if (s.stock() instanceof Sheet sh) {
-            return new Box2(0, 0, sh.width(), sh.height());
-        } else if (s.stock() instanceof Coil c) {
-            return new Box2(0, 0, s.usedLength(), c.width());
-        }
-        Envelope e = ((Remnant) s.stock()).outline().getEnvelopeInternal();
-        return new Box2(e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY());
+        return s.stock().match(
+                sh -> new Box2(0, 0, sh.width(), sh.height()),
+                r -> {
+                    Envelope e = r.outline().getEnvelopeInternal();
+                    return new Box2(e.getMinX(), e.getMinY(), e.getMaxX(), e.getMaxY());
+                },
+                c -> new Box2(0, 0, s.usedLength(), c.width()));
     }
 }

@@ -12,10 +12,7 @@ import dev.sheetwright.core.quote.ShopSettings;
 import dev.sheetwright.core.quote.StockUse;
 import dev.sheetwright.nest.jobs.JobNestRequest;
 import dev.sheetwright.nest.jobs.PatternShapes;
-import dev.sheetwright.nest.model.Coil;
 import dev.sheetwright.nest.model.Placement;
-import dev.sheetwright.nest.model.Remnant;
-import dev.sheetwright.nest.model.Sheet;
 import dev.sheetwright.nest.model.SheetLayout;
 import java.util.ArrayList;
 import java.util.List;
@@ -51,12 +48,9 @@ public final class JobQuote {
     }
 
     private static StockUse stockUse(SheetLayout s, List<Pattern> parts, CutFigures cut) {
-        if (s.stock() instanceof Sheet sh) {
-            return StockUse.sheet(sh.name(), sh.width(), sh.height(), sh.cost(), parts, cut);
-        } else if (s.stock() instanceof Remnant r) {
-            return StockUse.remnant(r.id(), r.outline().getArea(), r.cost(), parts, cut);
-        }
-        Coil c = (Coil) s.stock();
-        return StockUse.coil(c.name(), c.width(), s.usedLength(), c.costPerLength(), parts, cut);
+        return s.stock().match(
+                sh -> StockUse.sheet(sh.name(), sh.width(), sh.height(), sh.cost(), parts, cut),
+                r -> StockUse.remnant(r.id(), r.outline().getArea(), r.cost(), parts, cut),
+                c -> StockUse.coil(c.name(), c.width(), s.usedLength(), c.costPerLength(), parts, cut));
     }
 }
