@@ -55,13 +55,7 @@ class NestCommandTest {
         CommandRun run = CommandRun.of("nest", job("j.yaml", SMALL_JOB).toString(), "-o", out.toString(),
                 "--iterations", "20", "--seed", "7");
         assertEquals(0, run.exitCode(), run::toString);
-        JsonNode doc = new ObjectMapper().readTree(out.resolve("nest.json").toFile());
-        assertEquals(0, doc.get("unplaced").size());
-        int placed = 0;
-        for (JsonNode sheet : doc.get("sheets")) {
-            placed += sheet.get("parts").size();
-        }
-        assertEquals(5, placed, "2 reducer blanks and 3 collars");
+        JsonNode doc = NestDoc.allPlaced(out, 5, "2 reducer blanks and 3 collars");
         double partArea = doc.get("totals").get("partArea").asDouble();
         double stockArea = doc.get("totals").get("stockArea").asDouble();
         assertEquals(partArea / stockArea, doc.get("totals").get("utilization").asDouble(), 1e-12);

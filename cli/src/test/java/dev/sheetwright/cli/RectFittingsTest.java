@@ -81,13 +81,7 @@ class RectFittingsTest {
         CommandRun run = CommandRun.of("nest", Fixtures.path("demo-rooftop.yaml").toString(), "-o", out.toString(),
                 "--iterations", "4", "--seed", "3");
         assertEquals(0, run.exitCode(), run::toString);
-        JsonNode doc = new ObjectMapper().readTree(out.resolve("nest.json").toFile());
-        assertEquals(0, doc.get("unplaced").size());
-        int placed = 0;
-        for (JsonNode sheet : doc.get("sheets")) {
-            placed += sheet.get("parts").size();
-        }
-        assertEquals(26, placed, "every copy of every piece of the demo job");
+        JsonNode doc = NestDoc.allPlaced(out, 26, "every copy of every piece of the demo job");
         for (String f : List.of("quote.json", "quote.csv", "report.html", "report.pdf")) {
             assertTrue(Files.size(out.resolve(f)) > 0, f);
         }
