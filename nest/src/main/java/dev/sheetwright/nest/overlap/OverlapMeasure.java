@@ -4,9 +4,11 @@ package dev.sheetwright.nest.overlap;
  * Whether two placed search shapes collide (decided exactly: bounding boxes, then proper edge crossings, then
  * containment) and, if they do, how much: the summed penetration depth of their poles (inscribed circles),
  * r1 + r2 - distance for every pair of poles that overlap deeper than {@link #SHALLOW} of their radii (less for
- * shallow or apart pairs), or the depth of the deepest corner of one inside the other if that is more, never less
- * than {@code floor}. For two discs (one pole each) overlapping deeper than
- * that it is the exact penetration depth (the shortest move that separates them). Boundaries that only touch do not collide.
+ * shallow or apart pairs), never less than {@code floor}. When that sum is shallow (less than the largest pole of the
+ * smaller shape), the depth of the deepest corner of one inside the other counts instead if it is more, capped at that
+ * pole's radius so the measure has no jump where the corners stop counting. For two discs (one pole each) overlapping
+ * deeper than that it is the exact penetration depth (the shortest move that separates them). Boundaries that only
+ * touch do not collide.
  */
 final class OverlapMeasure {
     /** Below this share of their radii two poles count as barely touching (see {@link #poleDepth}). */
@@ -47,12 +49,20 @@ final class OverlapMeasure {
         if (!collide(a, b)) {
             return 0;
         }
-        return Math.max(floor, Math.max(poleDepth(a, b), Math.max(cornerDepth(a, b), cornerDepth(b, a))));
+        double poles = poleDepth(a, b);
+        double shallow = Math.min(a.shape.poleR[0], b.shape.poleR[0]);
+        if (poles >= shallow) {
+            return Math.max(floor, poles);
+        }
+        // a shallow overlap: the corners may reach deeper than the poles see (capped, so the measure stays continuous)
+        double corners = Math.min(shallow, Math.max(cornerDepth(a, b), cornerDepth(b, a)));
+        return Math.max(floor, Math.max(poles, corners));
     }
 
     /**
      * How deep the corners of a reach into b: the largest distance from a vertex of a inside b to the boundary of b.
-     * It sees the shallow corner overlaps the poles miss.
+     * It sees the shallow corner overlaps the poles miss. A vertex is no deeper in b than in b's bounding box, so
+     * vertices that cannot beat the deepest so far are skipped, and so are edges once one is nearer than that.
      */
     static double cornerDepth(PlacedShape a, PlacedShape b) {
         double deepest = 0;
@@ -60,11 +70,14 @@ final class OverlapMeasure {
         for (int i = 0; i < a.n(); i++) {
             double x = a.wx[i];
             double y = a.wy[i];
-            if (!inside(x, y, b)) {
+            // a point inside b is no deeper than it is inside b's bounding box: such a point cannot beat the deepest
+            double room = Math.min(Math.min(x - b.minX, b.maxX - x), Math.min(y - b.minY, b.maxY - y));
+            if (room <= deepest || !inside(x, y, b)) {
                 continue;
             }
-            double d2 = Double.POSITIVE_INFINITY;
-            for (int j = 0, pj = nb - 1; j < nb; pj = j++) {
+            double d2 = room * room;
+            double floor2 = deepest * deepest;
+            for (int j = 0, pj = nb - 1; j < nb && d2 > floor2; pj = j++) {
                 d2 = Math.min(d2, segmentDistance2(x, y, b.wx[pj], b.wy[pj], b.wx[j], b.wy[j]));
             }
             deepest = Math.max(deepest, Math.sqrt(d2));

@@ -49,6 +49,38 @@ class OverlapMeasureTest {
     }
 
     @Test
+    void aCornerPushedDeeperRaisesTheMeasureWithoutAJump() {
+        // a slat 12 x 1 turned 45 degrees pushes its corner into the side of a 10 x 10 square: its corner reaches
+        // deeper than its poles (radius 1/2) long before the poles' sum counts
+        SearchShape sq = SearchShape.of(Shapes.rect(0, 0, 10, 10), 0, 1e-9);
+        SearchShape slat = SearchShape.of(Shapes.rect(0, 0, 12, 1), 0, 1e-9);
+        PlacedShape a = at(sq, 0, 0, 0);
+        PlacedShape b = at(slat, 0, 0, 45);
+        double tip = Double.NEGATIVE_INFINITY; // how far the turned slat reaches left of its reference point
+        for (int k = 0; k < b.n(); k++) {
+            tip = Math.max(tip, -b.wx[k]);
+        }
+        double step = 0.005;
+        double last = 0;
+        boolean cornersCounted = false;
+        boolean polesCounted = false;
+        for (double depth = step; depth < 3; depth += step) {
+            // the slat's left-most corner at x = 5 - depth: depth inside a's right side
+            b.set(slat, 5 - depth + tip, 0.3, 45);
+            double poles = OverlapMeasure.poleDepth(a, b);
+            boolean shallow = poles < slat.poleR[0];
+            cornersCounted |= shallow && OverlapMeasure.cornerDepth(b, a) > slat.poleR[0];
+            polesCounted |= !shallow;
+            double o = measure.overlap(a, b);
+            assertTrue(o - last <= 0.1, "depth " + depth + ": the measure jumped from " + last + " to " + o);
+            assertTrue(o >= last - 0.1, "depth " + depth + ": the measure fell from " + last + " to " + o);
+            last = o;
+        }
+        assertTrue(cornersCounted && polesCounted,
+                "the slide crosses from a corner deeper than the slat's poles to the poles counting");
+    }
+
+    @Test
     void twoDiscsOverlapByRadiusSumLessDistance() {
         double r1 = 5;
         double r2 = 3;
