@@ -7,7 +7,9 @@ import java.util.SplittableRandom;
  * piece may move to any open bin: the sheet search uses one bin per sheet); pieces in one bin must not collide and must stay inside it. One overlapping piece at a time moves to the
  * position, bin and rotation that minimise its weighted overlap (samples over every bin and around the current
  * position, the best refined by coordinate descent); the weight of a pair that keeps overlapping grows, and decays
- * when they are apart. A run ends when the overlap is zero, or after {@link #STRIKES} rounds without progress.
+ * when they are apart. Overlaps count in proportion to the areas of the pieces involved (see {@link #size}): moving a
+ * small piece out of a large one's way is cheaper than the reverse, so large pieces settle and small ones fill the
+ * room left. A run ends when the overlap is zero, or after {@link #STRIKES} rounds without progress.
  *
  * <p>Single-threaded and deterministic for a given random source. The caller bounds the work by a deadline and a
  * move budget; {@link #moves()} counts the piece moves made.
@@ -47,6 +49,11 @@ final class Separator {
     private final double[] out;
     private final double[] outWeight;
     private final OverlapMeasure measure;
+    /**
+     * How much each piece's overlaps count: its area over the mean piece's (the square of the mean square root of
+     * the areas). A pair's overlap counts by the product of the two, sticking out of a bin by the square of one.
+     */
+    private final double[] size;
     private final AngleSet angles;
     private final SplittableRandom rnd;
     private final double precision;
@@ -77,6 +84,15 @@ final class Separator {
         }
         java.util.Arrays.fill(outWeight, 1);
         this.measure = measure;
+        this.size = new double[n];
+        double sum = 0;
+        for (int i = 0; i < n; i++) {
+            sum += Math.sqrt(shapes[i].area);
+        }
+        double mean = n > 0 ? sum / n : 1;
+        for (int i = 0; i < n; i++) {
+            size[i] = mean > 0 ? shapes[i].area / (mean * mean) : 1;
+        }
         this.angles = angles;
         this.rnd = rnd;
         this.precision = precision;
@@ -84,6 +100,11 @@ final class Separator {
 
     long moves() {
         return moves;
+    }
+
+    /** The random source of this separator (callers that perturb a layout draw from it too). */
+    SplittableRandom random() {
+        return rnd;
     }
 
     void place(int i, int b, double x, double y, double angle) {
@@ -94,9 +115,9 @@ final class Separator {
     /** Recomputes every overlap (after pieces were placed or bins changed). */
     void refresh() {
         for (int i = 0; i < n; i++) {
-            out[i] = asGiven(i) ? 0 : outsideOf(at[i], bin[i]);
+            out[i] = asGiven(i) ? 0 : outsideOf(at[i], bin[i]) * size[i] * size[i];
             for (int j = i + 1; j < n; j++) {
-                double o = counts(i, j) ? measure.overlap(at[i], at[j]) : 0;
+                double o = counts(i, j) ? measure.overlap(at[i], at[j]) * size[i] * size[j] : 0;
                 pair[i][j] = o;
                 pair[j][i] = o;
             }
@@ -162,7 +183,7 @@ final class Separator {
      */
     private double cost(int i, PlacedShape s, int b, double limit, boolean staying) {
         boolean forgiven = staying && asGiven(i);
-        double c = forgiven ? 0 : outWeight[i] * outsideOf(s, b);
+        double c = forgiven ? 0 : outWeight[i] * outsideOf(s, b) * size[i] * size[i];
         if (c > limit) {
             return c;
         }
@@ -170,7 +191,7 @@ final class Separator {
             if (j == i || bin[j] != b || (forgiven && asGiven(j))) {
                 continue;
             }
-            double o = measure.overlap(s, at[j]);
+            double o = measure.overlap(s, at[j]) * size[i] * size[j];
             if (o > 0) {
                 c += weight[i][j] * o;
                 if (c > limit) {
@@ -398,12 +419,12 @@ final class Separator {
 
     /** Recomputes the overlaps of piece i after it moved. */
     void update(int i) {
-        out[i] = asGiven(i) ? 0 : outsideOf(at[i], bin[i]);
+        out[i] = asGiven(i) ? 0 : outsideOf(at[i], bin[i]) * size[i] * size[i];
         for (int j = 0; j < n; j++) {
             if (j == i) {
                 continue;
             }
-            double o = counts(i, j) ? measure.overlap(at[i], at[j]) : 0;
+            double o = counts(i, j) ? measure.overlap(at[i], at[j]) * size[i] * size[j] : 0;
             pair[i][j] = o;
             pair[j][i] = o;
         }
