@@ -17,9 +17,9 @@ import dev.sheetwright.nest.model.Placement;
 import dev.sheetwright.nest.model.SheetLayout;
 
 /**
- * Shortens the strip (a coil) of a feasible one-strip nest by overlap minimisation: cut the strip shorter, move the
- * pieces that stick out back in, separate; on success keep it and cut again, on failure start again from the best
- * layout with two large pieces swapped and a smaller cut. The last share of the run cuts in small steps
+ * Shortens the strip (a coil) of a feasible one-strip nest by overlap minimisation: cut the strip shorter (the pieces
+ * right of a random line move left by the cut), separate; on success keep it and cut again, on failure start again
+ * from the best layout with two large pieces swapped and a smaller cut. The last share of the run cuts in small steps
  * (compression). Several logical workers search from seeds derived from the seed; the shortest layout that passes
  * {@link NestChecker} is returned, else the given one.
  *
@@ -207,13 +207,7 @@ public final class StripSearch {
                 if (fails > 0 && !compress) {
                     swapLarge();
                 }
-                sep.boxes[0][2] = target;
-                sep.refresh();
-                for (int i = 0; i < sep.n; i++) {
-                    if (sep.at[i].maxX > target) {
-                        sep.reinsert(i);
-                    }
-                }
+                cutStrip(target, bestLength);
                 sep.resetWeights();
                 if (sep.separate(budget)) {
                     best = sep.snapshot();
@@ -225,6 +219,27 @@ public final class StripSearch {
                 }
             }
             return bestLength < startLength ? best : null;
+        }
+
+        /**
+         * Cuts the strip from {@code length} to {@code target}: the pieces right of a random line move left by as much
+         * (they then overlap their neighbours along that line, which the separation resolves).
+         */
+        private void cutStrip(double target, double length) {
+            sep.boxes[0][2] = target;
+            double delta = length - target;
+            double split = x0 + rnd.nextDouble() * (length - x0);
+            for (int i = 0; i < sep.n; i++) {
+                boolean moves = sep.at[i].x > split;
+                if (moves) {
+                    sep.place(i, 0, sep.at[i].x - delta, sep.at[i].y, sep.at[i].angle);
+                }
+                if (moves || sep.at[i].maxX > target) {
+                    // a settled piece is forgiven for sticking out of its bin: not past the new end
+                    sep.settled[i] = false;
+                }
+            }
+            sep.refresh();
         }
 
         /** Disruption: two large pieces trade places (each keeps its rotation). */
