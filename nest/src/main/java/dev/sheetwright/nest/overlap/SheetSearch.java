@@ -20,11 +20,15 @@ import dev.sheetwright.nest.model.SheetLayout;
 import dev.sheetwright.nest.place.Nester;
 
 /**
- * Sheet elimination: takes a feasible nest on sheets (and remnants) and tries again and again to empty one sheet.
- * The sheet to empty is the least filled one (by part area; on a tie the later one); its parts go to their best
- * sampled places on the other sheets, overlap allowed, and the {@link Separator} removes the overlap moving one part
- * at a time over every sheet still open. On success the layout has one sheet fewer and is kept; on failure the
- * next least filled sheet is tried, until each was tried twice without success or the budget is spent.
+ * Sheet elimination: takes a feasible nest on sheets (and remnants) and empties sheets step by step. The sheet to
+ * empty is the least filled one (by part area; on a tie the later one). Its bin is cut shorter along x by a share of
+ * the length its parts use (the parts right of a random line move left by as much, overlapping their neighbours), and
+ * the {@link Separator} removes the overlap moving one part at a time over every sheet still open, so parts leave
+ * the sheet for room on the others. A step that separates is kept and the next cuts again; after
+ * {@link #FAILS_BEFORE_SMALLER_CUT} failures the cut halves, and below {@link #SMALLEST_CUT} the next least filled
+ * sheet is tried. When the bin is too short to hold any part the sheet closes: what is left on it goes to its best
+ * sampled place elsewhere, and a separation that succeeds leaves one sheet fewer. A worker stops when each sheet
+ * failed {@link #TRIES_PER_SHEET} times in a row or the budget is spent.
  *
  * <p>What stays where it is: layouts on remnants (they are the cheapest stock and keep their parts; sheet parts do
  * not move onto remnants, whose outlines need not be rectangles), parts that hold other parts in their holes and
@@ -43,8 +47,13 @@ public final class SheetSearch {
      * worker (memory quadratic in the parts), and on larger jobs the first engine makes better use of the time.
      */
     public static final int MAX_COPIES = 1500;
-    /** How many times each sheet may fail to be emptied before a worker gives up. */
+    /** How many times in a row each sheet may fail to be emptied before a worker gives up. */
     static final int TRIES_PER_SHEET = 2;
+    /** First cut of a sheet's used length, as a share of it; it halves after {@link #FAILS_BEFORE_SMALLER_CUT} fails. */
+    static final double FIRST_CUT = 0.1;
+    /** Below this cut the sheet is given up for another. */
+    static final double SMALLEST_CUT = 0.005;
+    static final int FAILS_BEFORE_SMALLER_CUT = 2;
 
     private static final GeometryFactory GF = new GeometryFactory();
 
@@ -64,6 +73,8 @@ public final class SheetSearch {
     private final double precision;
     private final OverlapMeasure measure;
     private final AngleSet angles;
+    /** The least width any part's search shape can take (a bin narrower than that holds no part). */
+    private final double smallestExtent;
 
     private SheetSearch(NestRequest request, NestResult start) {
         this.request = request;
@@ -131,6 +142,11 @@ public final class SheetSearch {
         }
         double meanReach = n > 0 ? reach / n : 1;
         this.measure = OverlapMeasure.forPieces(meanReach, precision);
+        double least = Double.POSITIVE_INFINITY;
+        for (SearchShape sh : shapes) {
+            least = Math.min(least, 2 * sh.poleR[0]);
+        }
+        this.smallestExtent = n > 0 ? least : 0;
     }
 
     /** Share of a timed search the first layout (the no-fit-polygon engine) gets before sheet elimination. */
@@ -327,34 +343,112 @@ public final class SheetSearch {
             sep.refresh();
             double[][] best = sep.snapshot();
             boolean[] bestOpen = sep.open.clone();
+            double[] bestEnds = ends();
             int startSheets = count(bestOpen);
+            int target = -1;
+            int tried = 0;
             int fails = 0;
+            double cut = FIRST_CUT;
             while (!budget.spent(sep.moves())) {
                 List<Integer> candidates = emptiable();
-                if (candidates.isEmpty() || fails >= TRIES_PER_SHEET * candidates.size()) {
+                if (candidates.isEmpty()) {
                     break;
                 }
-                int target = candidates.get(fails % candidates.size());
-                sep.open[target] = false;
-                for (int i = 0; i < sep.n; i++) {
-                    if (sep.bin[i] == target) {
-                        sep.reinsert(i);
+                if (target < 0 || !sep.open[target]) {
+                    if (tried >= TRIES_PER_SHEET * candidates.size()) {
+                        break;
                     }
+                    target = candidates.get(tried % candidates.size());
+                    cut = FIRST_CUT;
+                    fails = 0;
+                }
+                double[] box = sep.boxes[target];
+                double used = reach(target) - box[0];
+                double shorter = used * (1 - cut);
+                if (used <= 0 || shorter < smallestExtent) {
+                    // too short to hold a part: the sheet closes and what is left on it goes elsewhere
+                    sep.open[target] = false;
+                    for (int i = 0; i < sep.n; i++) {
+                        if (sep.bin[i] == target) {
+                            sep.reinsert(i);
+                        }
+                    }
+                } else {
+                    shortenBin(target, box[0] + shorter);
                 }
                 sep.resetWeights();
                 if (sep.separate(budget)) {
                     best = sep.snapshot();
-                    bestOpen = sep.open.clone();
+                    bestEnds = ends();
                     fails = 0;
-                    progress.found(sep.moves(), bestOpen, lastLength());
+                    if (!sep.open[target]) {
+                        bestOpen = sep.open.clone();
+                        progress.found(sep.moves(), bestOpen, lastLength());
+                        target = -1;
+                        tried = 0;
+                    }
                 } else {
                     System.arraycopy(bestOpen, 0, sep.open, 0, bestOpen.length);
+                    for (int b = 0; b < bestEnds.length; b++) {
+                        sep.boxes[b][2] = bestEnds[b];
+                    }
                     sep.restore(best);
-                    fails++;
+                    if (++fails >= FAILS_BEFORE_SMALLER_CUT) {
+                        fails = 0;
+                        cut /= 2;
+                        if (cut < SMALLEST_CUT) {
+                            // this sheet will not empty for now: try the next one
+                            target = -1;
+                            tried++;
+                        }
+                    }
                 }
             }
             int sheets = count(bestOpen);
             return sheets < startSheets ? new Found(best, bestOpen, sheets, costOf(bestOpen)) : null;
+        }
+
+        /** The far x side of every bin, to put back when a step fails. */
+        private double[] ends() {
+            double[] e = new double[sep.boxes.length];
+            for (int b = 0; b < e.length; b++) {
+                e[b] = sep.boxes[b][2];
+            }
+            return e;
+        }
+
+        /** How far the search shapes in bin b reach along x (the bin's near side when it is empty). */
+        private double reach(int b) {
+            double r = sep.boxes[b][0];
+            for (int i = 0; i < sep.n; i++) {
+                if (sep.bin[i] == b) {
+                    r = Math.max(r, sep.at[i].maxX);
+                }
+            }
+            return r;
+        }
+
+        /**
+         * Cuts bin b's far side back to {@code end}: the parts of b right of a random line move left by as much as was
+         * cut (they then overlap their neighbours, and the separation may move them to any open sheet).
+         */
+        private void shortenBin(int b, double end) {
+            double delta = reach(b) - end;
+            double split = sep.boxes[b][0] + sep.random().nextDouble() * (reach(b) - sep.boxes[b][0]);
+            sep.boxes[b][2] = end;
+            for (int i = 0; i < sep.n; i++) {
+                if (sep.bin[i] != b) {
+                    continue;
+                }
+                boolean moves = sep.at[i].x > split;
+                if (moves) {
+                    sep.place(i, b, sep.at[i].x - delta, sep.at[i].y, sep.at[i].angle);
+                }
+                if (moves || sep.at[i].maxX > end) {
+                    // a settled part is forgiven for sticking out of its bin: not past the new end
+                    sep.settled[i] = false;
+                }
+            }
         }
 
         /** How far the search shapes on the last open sheet reach along x, less the half gap they carry, plus the margin. */
