@@ -21,12 +21,19 @@ final class OverlapMeasure {
     static final double FLOOR_SHARE = 1e-3;
 
     /**
+     * Share of the precision by which an edge may cross another and still count as touching: far above round-off,
+     * and small enough that two touching pieces share no area an outside checker would see (with no gap, a crossing
+     * of the whole precision along a long edge left a common area of 1e-5 on a strip 40 wide).
+     */
+    static final double TOUCH_SHARE = 0.01;
+
+    /**
      * The measure a search uses for pieces of mean size {@code meanReach}: a collision counts at least
      * {@link #FLOOR_SHARE} of that size (never less than {@code precision}), and edges may touch within
-     * {@code precision}.
+     * {@link #TOUCH_SHARE} of {@code precision}.
      */
     static OverlapMeasure forPieces(double meanReach, double precision) {
-        return new OverlapMeasure(Math.max(precision, meanReach * FLOOR_SHARE), precision);
+        return new OverlapMeasure(Math.max(precision, meanReach * FLOOR_SHARE), precision * TOUCH_SHARE);
     }
 
     /**
