@@ -102,14 +102,46 @@ final class Separator {
         return moves;
     }
 
-    /** The random source of this separator (callers that perturb a layout draw from it too). */
-    SplittableRandom random() {
-        return rnd;
-    }
 
     void place(int i, int b, double x, double y, double angle) {
         bin[i] = b;
         at[i].set(shapes[i], x, y, angle);
+    }
+
+    /** How far the search shapes in bin b reach along x (the bin's near side when it holds none). */
+    double reach(int b) {
+        double r = boxes[b][0];
+        for (int i = 0; i < n; i++) {
+            if (bin[i] == b) {
+                r = Math.max(r, at[i].maxX);
+            }
+        }
+        return r;
+    }
+
+    /**
+     * Cuts bin b's far side back to {@code end}: the pieces of b right of a random line move left by as much as the
+     * bin's pieces reached past {@code end} (they then overlap their neighbours along that line, which
+     * {@link #separate} resolves). A settled piece the cut moves or leaves sticking out is settled no more: settled
+     * pieces are forgiven for sticking out of their bin, and must not be past the new end.
+     */
+    void cutBin(int b, double end) {
+        double reach = reach(b);
+        double delta = reach - end;
+        double split = boxes[b][0] + rnd.nextDouble() * (reach - boxes[b][0]);
+        boxes[b][2] = end;
+        for (int i = 0; i < n; i++) {
+            if (bin[i] != b) {
+                continue;
+            }
+            boolean moves = at[i].x > split;
+            if (moves) {
+                place(i, b, at[i].x - delta, at[i].y, at[i].angle);
+            }
+            if (moves || at[i].maxX > end) {
+                settled[i] = false;
+            }
+        }
     }
 
     /** Recomputes every overlap (after pieces were placed or bins changed). */

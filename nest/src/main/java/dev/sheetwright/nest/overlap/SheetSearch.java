@@ -363,7 +363,7 @@ public final class SheetSearch {
                     fails = 0;
                 }
                 double[] box = sep.boxes[target];
-                double used = reach(target) - box[0];
+                double used = sep.reach(target) - box[0];
                 double shorter = used * (1 - cut);
                 if (used <= 0 || shorter < smallestExtent) {
                     // too short to hold a part: the sheet closes and what is left on it goes elsewhere
@@ -374,7 +374,7 @@ public final class SheetSearch {
                         }
                     }
                 } else {
-                    shortenBin(target, box[0] + shorter);
+                    sep.cutBin(target, box[0] + shorter);
                 }
                 sep.resetWeights();
                 if (sep.separate(budget)) {
@@ -415,40 +415,6 @@ public final class SheetSearch {
                 e[b] = sep.boxes[b][2];
             }
             return e;
-        }
-
-        /** How far the search shapes in bin b reach along x (the bin's near side when it is empty). */
-        private double reach(int b) {
-            double r = sep.boxes[b][0];
-            for (int i = 0; i < sep.n; i++) {
-                if (sep.bin[i] == b) {
-                    r = Math.max(r, sep.at[i].maxX);
-                }
-            }
-            return r;
-        }
-
-        /**
-         * Cuts bin b's far side back to {@code end}: the parts of b right of a random line move left by as much as was
-         * cut (they then overlap their neighbours, and the separation may move them to any open sheet).
-         */
-        private void shortenBin(int b, double end) {
-            double delta = reach(b) - end;
-            double split = sep.boxes[b][0] + sep.random().nextDouble() * (reach(b) - sep.boxes[b][0]);
-            sep.boxes[b][2] = end;
-            for (int i = 0; i < sep.n; i++) {
-                if (sep.bin[i] != b) {
-                    continue;
-                }
-                boolean moves = sep.at[i].x > split;
-                if (moves) {
-                    sep.place(i, b, sep.at[i].x - delta, sep.at[i].y, sep.at[i].angle);
-                }
-                if (moves || sep.at[i].maxX > end) {
-                    // a settled part is forgiven for sticking out of its bin: not past the new end
-                    sep.settled[i] = false;
-                }
-            }
         }
 
         /** How far the search shapes on the last open sheet reach along x, less the half gap they carry, plus the margin. */

@@ -175,11 +175,7 @@ public final class StripSearch {
         }
 
         private double usedLength() {
-            double m = Double.NEGATIVE_INFINITY;
-            for (int i = 0; i < sep.n; i++) {
-                m = Math.max(m, sep.at[i].maxX);
-            }
-            return m;
+            return sep.reach(0);
         }
 
         /** Poses (bin, x, y, angle) of the shortest overlap-free layout found, or null if none beat the start. */
@@ -207,7 +203,7 @@ public final class StripSearch {
                 if (fails > 0 && !compress) {
                     swapLarge();
                 }
-                cutStrip(target, bestLength);
+                sep.cutBin(0, target);
                 sep.resetWeights();
                 if (sep.separate(budget)) {
                     best = sep.snapshot();
@@ -219,27 +215,6 @@ public final class StripSearch {
                 }
             }
             return bestLength < startLength ? best : null;
-        }
-
-        /**
-         * Cuts the strip from {@code length} to {@code target}: the pieces right of a random line move left by as much
-         * (they then overlap their neighbours along that line, which the separation resolves).
-         */
-        private void cutStrip(double target, double length) {
-            sep.boxes[0][2] = target;
-            double delta = length - target;
-            double split = x0 + rnd.nextDouble() * (length - x0);
-            for (int i = 0; i < sep.n; i++) {
-                boolean moves = sep.at[i].x > split;
-                if (moves) {
-                    sep.place(i, 0, sep.at[i].x - delta, sep.at[i].y, sep.at[i].angle);
-                }
-                if (moves || sep.at[i].maxX > target) {
-                    // a settled piece is forgiven for sticking out of its bin: not past the new end
-                    sep.settled[i] = false;
-                }
-            }
-            sep.refresh();
         }
 
         /** Disruption: two large pieces trade places (each keeps its rotation). */
