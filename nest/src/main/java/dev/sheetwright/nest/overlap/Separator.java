@@ -120,15 +120,14 @@ final class Separator {
     }
 
     /**
-     * Cuts bin b's far side back to {@code end}: the pieces of b right of a random line move left by as much as the
-     * bin's pieces reached past {@code end} (they then overlap their neighbours along that line, which
-     * {@link #separate} resolves). A settled piece the cut moves or leaves sticking out is settled no more: settled
-     * pieces are forgiven for sticking out of their bin, and must not be past the new end.
+     * Cuts bin b from {@code length} (where its pieces reach) back to {@code end}: the pieces of b right of a random
+     * line move left by the difference (they then overlap their neighbours along that line, which {@link #separate}
+     * resolves). A settled piece the cut moves or leaves sticking out is settled no more: settled pieces are forgiven
+     * for sticking out of their bin, and must not be past the new end.
      */
-    void cutBin(int b, double end) {
-        double reach = reach(b);
-        double delta = reach - end;
-        double split = boxes[b][0] + rnd.nextDouble() * (reach - boxes[b][0]);
+    void cutBin(int b, double length, double end) {
+        double delta = length - end;
+        double split = boxes[b][0] + rnd.nextDouble() * (length - boxes[b][0]);
         boxes[b][2] = end;
         for (int i = 0; i < n; i++) {
             if (bin[i] != b) {

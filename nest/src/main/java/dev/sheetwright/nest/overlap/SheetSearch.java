@@ -374,7 +374,7 @@ public final class SheetSearch {
                         }
                     }
                 } else {
-                    sep.cutBin(target, box[0] + shorter);
+                    sep.cutBin(target, box[0] + used, box[0] + shorter);
                 }
                 sep.resetWeights();
                 if (sep.separate(budget)) {

@@ -203,7 +203,7 @@ public final class StripSearch {
                 if (fails > 0 && !compress) {
                     swapLarge();
                 }
-                sep.cutBin(0, target);
+                sep.cutBin(0, bestLength, target);
                 sep.resetWeights();
                 if (sep.separate(budget)) {
                     best = sep.snapshot();
