@@ -133,6 +133,7 @@ final class OverlapMeasure {
         double oy1 = Math.min(a.maxY, b.maxY);
         double[] la = a.shape.edgeLength;
         double[] lb = b.shape.edgeLength;
+        boolean near = false;
         for (int i = 0, pi = na - 1; i < na; pi = i++) {
             double ax0 = a.wx[pi];
             double ay0 = a.wy[pi];
@@ -152,8 +153,12 @@ final class OverlapMeasure {
                 double by0 = b.wy[pj];
                 double bx1 = b.wx[j];
                 double by1 = b.wy[j];
-                if (Math.max(bx0, bx1) <= ex0 || Math.min(bx0, bx1) >= ex1 || Math.max(by0, by1) <= ey0 || Math.min(by0, by1) >= ey1) {
+                if (Math.max(bx0, bx1) < ex0 || Math.min(bx0, bx1) > ex1 || Math.max(by0, by1) < ey0 || Math.min(by0, by1) > ey1) {
                     continue;
+                }
+                near = true;
+                if (Math.max(bx0, bx1) == ex0 || Math.min(bx0, bx1) == ex1 || Math.max(by0, by1) == ey0 || Math.min(by0, by1) == ey1) {
+                    continue; // boxes that only touch: no proper crossing
                 }
                 if (properCross(ax0, ay0, ax1, ay1, la[i] * slack, bx0, by0, bx1, by1, lb[j] * slack)) {
                     return true;
@@ -161,8 +166,13 @@ final class OverlapMeasure {
             }
         }
         // no proper crossing: apart, touching, one inside the other, or crossing only at vertices and along
-        // collinear edges; test a deep point, every vertex and every edge midpoint of each against the other
-        return inside(a.px[0], a.py[0], b) || inside(b.px[0], b.py[0], a) || pointsInside(a, b) || pointsInside(b, a);
+        // collinear edges. A deep point (the first pole's centre) of each tested against the other tells one inside
+        // the other; when no two edges even have touching boxes, the boundaries do not meet and that is all there is
+        // to test. Else every vertex and every edge midpoint of each is tested against the other.
+        if (inside(a.px[0], a.py[0], b) || inside(b.px[0], b.py[0], a)) {
+            return true;
+        }
+        return near && (pointsInside(a, b) || pointsInside(b, a));
     }
 
     /** Whether a vertex or an edge midpoint of a lies inside b, farther than the slack from its boundary. */
