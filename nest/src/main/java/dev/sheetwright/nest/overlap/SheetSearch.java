@@ -11,6 +11,7 @@ import org.locationtech.jts.geom.Polygon;
 
 import dev.sheetwright.nest.check.NestChecker;
 import dev.sheetwright.nest.model.NestFailure;
+import dev.sheetwright.nest.model.NestRanking;
 import dev.sheetwright.nest.model.NestOptions;
 import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestResult;
@@ -20,21 +21,25 @@ import dev.sheetwright.nest.model.SheetLayout;
 import dev.sheetwright.nest.place.Nester;
 
 /**
- * Sheet elimination: takes a feasible nest on sheets (and remnants) and empties sheets step by step. The sheet to
- * empty is the least filled one (by part area; on a tie the later one). Its bin is cut shorter along x by a share of
- * the length its parts use (the parts right of a random line move left by as much, overlapping their neighbours), and
- * the {@link Separator} removes the overlap moving one part at a time over every sheet still open, so parts leave
- * the sheet for room on the others. A step that separates is kept and the next cuts again; after
- * {@link #FAILS_BEFORE_SMALLER_CUT} failures the cut halves, and below {@link #SMALLEST_CUT} the next least filled
- * sheet is tried. When the bin is too short to hold any part the sheet closes: what is left on it goes to its best
- * sampled place elsewhere, and a separation that succeeds leaves one sheet fewer. A worker stops when each sheet
- * failed {@link #TRIES_PER_SHEET} times in a row or the budget is spent.
+ * Sheet elimination: takes a feasible nest on sheets (and remnants) and empties sheets one at a time. The sheet to
+ * empty is the least filled one (by part area; on a tie the later one). Its parts go, largest first, one at a time
+ * onto another open sheet: the part is put where it overlaps least among places sampled there, and a {@link Separator}
+ * over that sheet's parts alone (all of them may move, within the sheet) removes the overlap. First each sheet with
+ * room for the part by area gets a quick try ({@link #QUICK_MOVES} piece moves: a part that fits a hole, or nearly),
+ * the emptiest first; then {@link #DESTINATIONS} of them a thorough one ({@link #ATTEMPT_MOVES}). When every part
+ * has left, the sheet closes and the next least filled one is emptied. A part that stays keeps the sheet open; the
+ * parts that moved stay moved (the layout is feasible after every insertion, and the sheet only emptier), and the
+ * next round tries again with the thorough tries on sheets chosen at random. A worker stops after
+ * {@link #STALE_ROUNDS} rounds in a row that move no part, or when the budget is spent.
+ *
+ * <p>Separating on one sheet at a time keeps each separation small (a sheet's parts, not the job's), so it is fast
+ * enough on jobs of hundreds of parts.
  *
  * <p>What stays where it is: layouts on remnants (they are the cheapest stock and keep their parts; sheet parts do
  * not move onto remnants, whose outlines need not be rectangles), parts that hold other parts in their holes and
- * those held parts (the host is fixed, the held part keeps its place in the hole), and coils (no strip shortening
- * here). So a remnant is never traded for a sheet and the cost never rises. Each sheet's bin is the sheet less the
- * margin, widened by half the gap, since the search shapes carry half the gap.
+ * those held parts (the host is fixed, the held part keeps its place in the hole; a sheet with such a host is never
+ * emptied), and coils. So a remnant is never traded for a sheet and the cost never rises. Each sheet's bin is the
+ * sheet less the margin, widened by half the gap, since the search shapes carry half the gap.
  *
  * <p>With an iteration count, {@link StripSearch#FIXED_WORKERS} logical workers each make an equal share of the
  * piece moves, whatever the thread count, so the result depends only on the input, the seed and the count; a timed
@@ -47,13 +52,14 @@ public final class SheetSearch {
      * worker (memory quadratic in the parts), and on larger jobs the first engine makes better use of the time.
      */
     public static final int MAX_COPIES = 1500;
-    /** How many times in a row each sheet may fail to be emptied before a worker gives up. */
-    static final int TRIES_PER_SHEET = 2;
-    /** First cut of a sheet's used length, as a share of it; it halves after {@link #FAILS_BEFORE_SMALLER_CUT} fails. */
-    static final double FIRST_CUT = 0.1;
-    /** Below this cut the sheet is given up for another. */
-    static final double SMALLEST_CUT = 0.005;
-    static final int FAILS_BEFORE_SMALLER_CUT = 2;
+    /** Most open sheets a part is offered to, in one try to empty a sheet. */
+    static final int DESTINATIONS = 4;
+    /** Most piece moves a quick insertion may take to separate. */
+    static final long QUICK_MOVES = 100;
+    /** Most piece moves one insertion may take to separate. */
+    static final long ATTEMPT_MOVES = 3000;
+    /** Rounds in a row that move no part before a worker gives up. */
+    static final int STALE_ROUNDS = 3;
 
     private static final GeometryFactory GF = new GeometryFactory();
 
@@ -149,14 +155,33 @@ public final class SheetSearch {
         this.smallestExtent = n > 0 ? least : 0;
     }
 
+    /**
+     * Shortest time limit for which a job's nest searches sheets unless told otherwise. The first layout then gets
+     * half the time, and on shorter runs that costs more than the sheet search wins: measured on the fixture jobs
+     * (README, nesting benchmarks), at 10 s it left a smaller offcut on the last sheet and saved no sheet, at 30 s
+     * and 60 s it saved one of twelve on riverside-300.
+     */
+    public static final java.time.Duration WORTHWHILE = java.time.Duration.ofSeconds(30);
+
+    /**
+     * Whether a job's nest searches sheets when not told: a timed run of at least {@link #WORTHWHILE} (a run of fixed
+     * steps does not, so that its nest stays what the first engine makes of the steps).
+     */
+    public static boolean byDefault(NestOptions options) {
+        return options.iterations().isEmpty() && options.timeLimit().compareTo(WORTHWHILE) >= 0;
+    }
+
     /** Share of a timed search the first layout (the no-fit-polygon engine) gets before sheet elimination. */
     public static final double FIRST_LAYOUT_SHARE = 0.5;
 
     /**
      * A nest of {@code request} in two stages: the no-fit-polygon engine ({@link Nester}) makes the first layout in
      * {@link #FIRST_LAYOUT_SHARE} of the time (with an iteration count: all its steps), then {@link #eliminate} tries
-     * to empty sheets in the rest (with an iteration count: as many piece moves). When the sheet search does not
-     * apply (no sheets, or more than {@link #MAX_COPIES} copies) the first engine gets all the time.
+     * to empty sheets in the rest (with an iteration count: as many piece moves). A timed run on two threads or more
+     * gives one of them in the second stage to another run of the first engine from another seed, and the better
+     * nest by {@link NestRanking} wins (ties to the sheet search): a second chance at the first layout's tie-breaks
+     * (the last sheet's offcut) when no sheet could be emptied. When the sheet search does not apply (no sheets, or
+     * more than {@link #MAX_COPIES} copies) the first engine gets all the time.
      *
      * @throws NestFailure if the sheet search fails (a bug)
      */
@@ -166,6 +191,37 @@ public final class SheetSearch {
         }
         long deadline = System.nanoTime() + Math.min(options.timeLimit().toNanos(), Long.MAX_VALUE / 4);
         NestResult start = Nester.nest(request, options.share(FIRST_LAYOUT_SHARE));
+        boolean portfolio = options.iterations().isEmpty() && options.threads() >= 2;
+        if (!portfolio) {
+            return eliminateOrFail(request, start, options, deadline);
+        }
+        NestOptions searchOptions = new NestOptions(options.timeLimit(), options.iterations(), options.seed(),
+                options.threads() - 1, options.listener());
+        long left = Math.max(0, deadline - System.nanoTime());
+        NestOptions againOptions = NestOptions.timed(java.time.Duration.ofNanos(left),
+                LogicalWorkers.seedOf(options.seed(), options.threads()), 1);
+        java.util.concurrent.ExecutorService ex = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "first-layout-again");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            java.util.concurrent.Future<NestResult> again = ex.submit(() -> Nester.nest(request, againOptions));
+            NestResult searched = eliminateOrFail(request, start, searchOptions, deadline);
+            NestResult other = again.get();
+            return NestRanking.BEST_FIRST.compare(other, searched) < 0 ? other : searched;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new NestFailure("nesting was interrupted", e);
+        } catch (java.util.concurrent.ExecutionException e) {
+            Throwable c = e.getCause();
+            throw c instanceof NestFailure nf ? nf : new NestFailure("the nesting engine failed (a bug; nothing was written): " + c, c);
+        } finally {
+            ex.shutdownNow();
+        }
+    }
+
+    private static NestResult eliminateOrFail(NestRequest request, NestResult start, NestOptions options, long deadline) {
         try {
             return eliminate(request, start, options, deadline);
         } catch (RuntimeException | OutOfMemoryError e) {
@@ -311,124 +367,187 @@ public final class SheetSearch {
         }
     }
 
-    /** One logical worker with its own random source. */
+    /**
+     * One logical worker with its own random source. It keeps every part's pose (bin, x, y, angle, 1 while settled)
+     * and which sheets are open, and changes them only by an insertion that separated.
+     */
     private final class Worker {
+        private final SplittableRandom rnd;
         private final Separator.Budget budget;
         private final Progress progress;
-        private final Separator sep;
+        private double[][] pose;
+        private final boolean[] open = new boolean[boxes.length];
+        private final PlacedShape scratch = new PlacedShape();
+        private long moves;
 
         Worker(long seed, Separator.Budget budget, Progress progress) {
+            this.rnd = new SplittableRandom(seed);
             this.budget = budget;
             this.progress = progress;
-            double[][] myBoxes = new double[boxes.length][];
-            for (int b = 0; b < boxes.length; b++) {
-                myBoxes[b] = boxes[b].clone();
-            }
-            this.sep = new Separator(shapes, myBoxes, measure, angles, new SplittableRandom(seed), precision);
+        }
+
+        private boolean spent() {
+            return budget.spent(moves);
         }
 
         /** The fewest-sheet layout found, or null if no sheet could be emptied. */
         Found call() {
-            for (int i = 0; i < sep.n; i++) {
+            int n = parts.size();
+            pose = new double[n][];
+            for (int i = 0; i < n; i++) {
                 Placement p = parts.get(i);
                 double[] ref = PiecePoses.reference(p, shapes[i]);
-                sep.place(i, partBin.get(i), ref[0], ref[1], p.rotationDeg());
+                // the first layout is feasible for the true outlines, but search shapes are larger: every part starts
+                // settled (what it overlaps there is forgiven) until it moves
+                pose[i] = new double[] {partBin.get(i), ref[0], ref[1], p.rotationDeg(), partFixed[i] ? 0 : 1};
             }
-            // the first layout is feasible for the true outlines, but search shapes are larger: every part starts
-            // settled (what it overlaps there is forgiven) until it moves
-            for (int i = 0; i < sep.n; i++) {
-                sep.fixed[i] = partFixed[i];
-                sep.settled[i] = !partFixed[i];
-            }
-            sep.refresh();
-            double[][] best = sep.snapshot();
-            boolean[] bestOpen = sep.open.clone();
-            double[] bestEnds = ends();
-            int startSheets = count(bestOpen);
-            int target = -1;
-            int tried = 0;
-            int fails = 0;
-            double cut = FIRST_CUT;
-            while (!budget.spent(sep.moves())) {
+            java.util.Arrays.fill(open, true);
+            int startSheets = count(open);
+            int round = 0;
+            int stale = 0;
+            while (!spent() && stale < STALE_ROUNDS) {
                 List<Integer> candidates = emptiable();
                 if (candidates.isEmpty()) {
                     break;
                 }
-                if (target < 0 || !sep.open[target]) {
-                    if (tried >= TRIES_PER_SHEET * candidates.size()) {
-                        break;
-                    }
-                    target = candidates.get(tried % candidates.size());
-                    cut = FIRST_CUT;
-                    fails = 0;
+                // only the least filled sheet: parts leaving another could only fill it up again
+                int t = candidates.get(0);
+                int before = partsOn(t);
+                boolean moved = empty(t, round);
+                if (moved) {
+                    progress.found(moves, open, lastLength());
                 }
-                double[] box = sep.boxes[target];
-                double used = sep.reach(target) - box[0];
-                double shorter = used * (1 - cut);
-                if (used <= 0 || shorter < smallestExtent) {
-                    // too short to hold a part: the sheet closes and what is left on it goes elsewhere
-                    sep.open[target] = false;
-                    for (int i = 0; i < sep.n; i++) {
-                        if (sep.bin[i] == target) {
-                            sep.reinsert(i);
-                        }
-                    }
-                } else {
-                    sep.cutBin(target, box[0] + used, box[0] + shorter);
-                }
-                sep.resetWeights();
-                if (sep.separate(budget)) {
-                    best = sep.snapshot();
-                    bestEnds = ends();
-                    fails = 0;
-                    if (!sep.open[target]) {
-                        bestOpen = sep.open.clone();
-                        progress.found(sep.moves(), bestOpen, lastLength());
-                        target = -1;
-                        tried = 0;
-                    }
-                } else {
-                    System.arraycopy(bestOpen, 0, sep.open, 0, bestOpen.length);
-                    for (int b = 0; b < bestEnds.length; b++) {
-                        sep.boxes[b][2] = bestEnds[b];
-                    }
-                    sep.restore(best);
-                    if (++fails >= FAILS_BEFORE_SMALLER_CUT) {
-                        fails = 0;
-                        cut /= 2;
-                        if (cut < SMALLEST_CUT) {
-                            // this sheet will not empty for now: try the next one
-                            target = -1;
-                            tried++;
-                        }
-                    }
-                }
+                moved |= partsOn(t) < before;
+                stale = moved ? 0 : stale + 1;
+                round++;
             }
-            int sheets = count(bestOpen);
-            return sheets < startSheets ? new Found(best, bestOpen, sheets, costOf(bestOpen)) : null;
+            int sheets = count(open);
+            return sheets < startSheets ? new Found(pose, open.clone(), sheets, costOf(open)) : null;
         }
 
-        /** The far x side of every bin, to put back when a step fails. */
-        private double[] ends() {
-            double[] e = new double[sep.boxes.length];
-            for (int b = 0; b < e.length; b++) {
-                e[b] = sep.boxes[b][2];
+        /** How many parts are on sheet b. */
+        private int partsOn(int b) {
+            int c = 0;
+            for (double[] p : pose) {
+                c += (int) p[0] == b ? 1 : 0;
             }
-            return e;
+            return c;
+        }
+
+        /**
+         * Tries to move every part of sheet t onto the other open sheets, largest first, each by {@link #insert}:
+         * first a quick try on every sheet with room for it (a part that fits a hole there, or nearly), then a
+         * thorough one on {@link #DESTINATIONS} sheets (the emptiest in a first round, else chosen at random). Once
+         * a part stays, the rest get the quick tries only. Returns whether t was emptied (it then closes); parts
+         * that moved stay moved either way (the layout stays feasible and t only emptier).
+         */
+        private boolean empty(int t, int round) {
+            List<Integer> mine = new ArrayList<>();
+            for (int i = 0; i < pose.length; i++) {
+                if ((int) pose[i][0] == t) {
+                    mine.add(i);
+                }
+            }
+            mine.sort(Comparator.<Integer>comparingDouble(i -> -shapes[i].area));
+            boolean all = true;
+            for (int q : mine) {
+                if (spent()) {
+                    return false;
+                }
+                List<Integer> dests = destinations(t, q);
+                boolean placed = false;
+                for (int k = 0; k < dests.size() && !placed && !spent(); k++) {
+                    placed = insert(q, dests.get(k), QUICK_MOVES);
+                }
+                if (!placed && all) {
+                    if (round > 0) {
+                        for (int k = dests.size() - 1; k > 0; k--) {
+                            int j = rnd.nextInt(k + 1);
+                            dests.set(k, dests.set(j, dests.get(k)));
+                        }
+                    }
+                    for (int k = 0; k < Math.min(DESTINATIONS, dests.size()) && !placed && !spent(); k++) {
+                        placed = insert(q, dests.get(k), ATTEMPT_MOVES);
+                    }
+                }
+                all &= placed;
+            }
+            if (all) {
+                open[t] = false;
+            }
+            return all;
+        }
+
+        /** The open sheets other than t with room for part q by area, the emptiest first. */
+        private List<Integer> destinations(int t, int q) {
+            double[] used = new double[boxes.length];
+            for (int i = 0; i < pose.length; i++) {
+                used[(int) pose[i][0]] += shapes[i].area;
+            }
+            List<Integer> out = new ArrayList<>();
+            double[] free = new double[boxes.length];
+            for (int b = 0; b < boxes.length; b++) {
+                double[] bx = boxes[b];
+                free[b] = (bx[2] - bx[0]) * (bx[3] - bx[1]) - used[b];
+                if (b != t && open[b] && free[b] >= shapes[q].area) {
+                    out.add(b);
+                }
+            }
+            out.sort(Comparator.<Integer>comparingDouble(b -> -free[b]).thenComparingInt(b -> b));
+            return out;
+        }
+
+        /**
+         * Puts part q onto sheet d at the place of least overlap sampled there, and separates the parts of d (all of
+         * them may move, within d only); on success the poses take the separated layout.
+         */
+        private boolean insert(int q, int d, long most) {
+            List<Integer> local = new ArrayList<>();
+            for (int i = 0; i < pose.length; i++) {
+                if ((int) pose[i][0] == d) {
+                    local.add(i);
+                }
+            }
+            local.add(q);
+            int m = local.size();
+            SearchShape[] ls = new SearchShape[m];
+            for (int k = 0; k < m; k++) {
+                ls[k] = shapes[local.get(k)];
+            }
+            Separator sep = new Separator(ls, new double[][] {boxes[d].clone()}, measure, angles, rnd, precision);
+            for (int k = 0; k < m; k++) {
+                int i = local.get(k);
+                double[] p = pose[i];
+                sep.place(k, 0, p[1], p[2], p[3]);
+                sep.fixed[k] = partFixed[i];
+                sep.settled[k] = i != q && p[4] != 0;
+            }
+            sep.reinsert(m - 1);
+            long limit = Math.min(most, budget.moveLimit() - moves);
+            boolean ok = sep.separate(new Separator.Budget(budget.deadline(), limit));
+            moves += sep.moves();
+            if (ok) {
+                for (int k = 0; k < m; k++) {
+                    PlacedShape at = sep.at[k];
+                    pose[local.get(k)] = new double[] {d, at.x, at.y, at.angle, sep.settled[k] ? 1 : 0};
+                }
+            }
+            return ok;
         }
 
         /** How far the search shapes on the last open sheet reach along x, less the half gap they carry, plus the margin. */
         private double lastLength() {
             int last = -1;
-            for (int b = 0; b < sep.open.length; b++) {
-                if (sep.open[b]) {
+            for (int b = 0; b < open.length; b++) {
+                if (open[b]) {
                     last = b;
                 }
             }
             double reach = 0;
-            for (int i = 0; i < sep.n; i++) {
-                if (sep.bin[i] == last) {
-                    reach = Math.max(reach, sep.at[i].maxX);
+            for (int i = 0; i < pose.length; i++) {
+                if ((int) pose[i][0] == last) {
+                    scratch.set(shapes[i], pose[i][1], pose[i][2], pose[i][3]);
+                    reach = Math.max(reach, scratch.maxX);
                 }
             }
             double gap = request.rules().gap();
@@ -439,25 +558,34 @@ public final class SheetSearch {
         private List<Integer> emptiable() {
             double[] area = new double[boxes.length];
             boolean[] blocked = new boolean[boxes.length];
-            for (int i = 0; i < sep.n; i++) {
-                area[sep.bin[i]] += shapes[i].area;
-                blocked[sep.bin[i]] |= partFixed[i];
+            for (int i = 0; i < pose.length; i++) {
+                int b = (int) pose[i][0];
+                area[b] += shapes[i].area;
+                blocked[b] |= partFixed[i];
             }
             for (int b = 0; b < boxes.length; b++) {
                 blocked[b] |= !held.get(b).isEmpty();
             }
             List<Integer> out = new ArrayList<>();
-            if (count(sep.open) < 2) {
+            if (count(open) < 2) {
                 return out;
             }
             for (int b = 0; b < boxes.length; b++) {
-                if (sep.open[b] && !blocked[b]) {
+                if (open[b] && !blocked[b]) {
                     out.add(b);
                 }
             }
             out.sort(Comparator.<Integer>comparingDouble(b -> area[b]).thenComparing(Comparator.<Integer>reverseOrder()));
             return out;
         }
+    }
+
+    private static double[][] copy(double[][] poses) {
+        double[][] c = new double[poses.length][];
+        for (int i = 0; i < poses.length; i++) {
+            c[i] = poses[i].clone();
+        }
+        return c;
     }
 
     private static int count(boolean[] open) {

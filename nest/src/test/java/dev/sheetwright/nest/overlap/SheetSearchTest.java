@@ -142,4 +142,44 @@ class SheetSearchTest {
         NestResult start = wasteful(List.of());
         assertEquals(start, SheetSearch.eliminate(req, start, NestOptions.steps(0, 1, 1), Long.MAX_VALUE));
     }
+
+    @Test
+    void aPartThatFitsNoHoleGetsInOnceTheOthersOnTheSheetMove() {
+        // sheet A: two 4 x 8 plates with a gap of 2 between them and 1 free on the right; sheet B: one 2.4 x 8 slat.
+        // The slat needs 2.9 with its gaps: it fits on A only once a plate moves over.
+        List<NestPiece> pieces = List.of(
+                NestPiece.of("PL", "plate", 2, Shapes.rect(0, 0, 4, 8)),
+                NestPiece.of("SL", "slat", 1, Shapes.rect(0, 0, 2.4, 8)));
+        List<Stock> stock = List.of(SHEET);
+        NestRequest req = new NestRequest(pieces, stock, new NestRules(0.25, 0.5, RotationRule.quarter(), false, 0.01),
+                NestPrecision.ofScale(NestPrecision.scaleOf(pieces, stock)));
+        NestResult start = new NestResult(List.of(
+                new SheetLayout(SHEET, 0, 10.5, List.of(new Placement("PL", "plate", 0, 0.5, 0.5, 0, false),
+                        new Placement("PL", "plate", 1, 6.5, 0.5, 0, false)), null, 0.53),
+                new SheetLayout(SHEET, 1, 2.9, List.of(new Placement("SL", "slat", 0, 0.5, 0.5, 0, false)), null, 0.16)),
+                List.of());
+        assertTrue(NestChecker.check(req, start).isEmpty(), "feasible start: " + NestChecker.check(req, start));
+        NestResult r = SheetSearch.eliminate(req, start, NestOptions.steps(3000, 2, 1), Long.MAX_VALUE);
+        assertEquals(1, sheetsOf(r), "the plates make room for the slat");
+        assertEquals(3, r.placedCount());
+        assertTrue(NestChecker.check(req, r).isEmpty(), "checker: " + NestChecker.check(req, r));
+    }
+
+    @Test
+    void aTimedRunOnTwoThreadsPlacesEveryPartAndPassesTheChecker() {
+        NestRequest req = request(RotationRule.free(), List.of(SHEET));
+        NestResult r = SheetSearch.nest(req, NestOptions.timed(java.time.Duration.ofMillis(1500), 1, 2));
+        assertEquals(8, r.placedCount());
+        assertTrue(r.unplaced().isEmpty());
+        assertTrue(sheetsOf(r) <= 2, "eight small parts fit on two sheets, got " + sheetsOf(r));
+        assertTrue(NestChecker.check(req, r).isEmpty(), "checker: " + NestChecker.check(req, r));
+    }
+
+    @Test
+    void sheetsAreSearchedByDefaultOnlyOnTimedRunsOfAtLeastHalfAMinute() {
+        assertTrue(SheetSearch.byDefault(NestOptions.timed(java.time.Duration.ofSeconds(30), 1, 2)));
+        assertTrue(SheetSearch.byDefault(NestOptions.timed(java.time.Duration.ofSeconds(60), 1, 1)));
+        assertTrue(!SheetSearch.byDefault(NestOptions.timed(java.time.Duration.ofSeconds(10), 1, 2)));
+        assertTrue(!SheetSearch.byDefault(NestOptions.steps(100000, 1, 2)));
+    }
 }
