@@ -150,7 +150,7 @@ public final class NestCommand implements Callable<Integer> {
             JobNest nest;
             try (Progress progress = Progress.forTerminal(err, seconds, Progress.coilOnly(job))) {
                 NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
-                nest = JobNest.run(job, jobFile.label(), options, fromRack, sheetSearch.on());
+                nest = JobNest.run(job, jobFile.label(), options, fromRack, sheetSearch.on(options));
             }
             CutPlans cuts = CutPlans.of(nest, file.cutPath());
             RackPlan plan = rack == null ? null : rack.settle(nest, min);

@@ -14,6 +14,7 @@ import dev.sheetwright.cli.run.QuoteFiles;
 import dev.sheetwright.core.job.Job;
 import dev.sheetwright.core.quote.Quote;
 import dev.sheetwright.core.quote.ShopSettings;
+import dev.sheetwright.nest.model.NestOptions;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
@@ -63,8 +64,8 @@ public final class QuoteCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         JobNest nest;
         try (Progress progress = Progress.forTerminal(err, seconds, Progress.coilOnly(job))) {
-            nest = JobNest.run(job, jobFile.label(), search.nestOptions(DEFAULT_SECONDS, progress), List.of(),
-                    sheetSearch.on());
+            NestOptions options = search.nestOptions(DEFAULT_SECONDS, progress);
+            nest = JobNest.run(job, jobFile.label(), options, List.of(), sheetSearch.on(options));
         }
         Quote q;
         if (out != null) {
