@@ -6,8 +6,8 @@ import java.util.List;
 /**
  * The shop's order of two nests of one request, best first: every piece placed (fewest unplaced copies), then the
  * cheapest stock, then the least stock area (remnants before sheets of the same cost), then the fewest layouts, then
- * the shortest used length on the last layout (the largest clean offcut left there). Costs and areas within
- * {@link NestPrecision#RELATIVE_TIE} of each other tie. The first engine ranks its layouts the same way.
+ * the shortest used length on the last layout (the largest clean offcut left there). Costs, areas and lengths
+ * within {@link NestPrecision#RELATIVE_TIE} of each other tie. The first engine ranks its layouts the same way.
  */
 public final class NestRanking {
     /** Best first. */
@@ -33,7 +33,7 @@ public final class NestRanking {
         if (c != 0) {
             return c;
         }
-        return Double.compare(lastLength(a), lastLength(b));
+        return NestPrecision.compareTotals(lastLength(a), lastLength(b));
     }
 
     /** Total cost of the stock a nest uses (a coil by the length cut off). */
