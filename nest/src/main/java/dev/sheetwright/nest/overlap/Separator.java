@@ -44,6 +44,8 @@ final class Separator {
      * shapes are larger than the true outlines. A settled piece that moves is settled no more.
      */
     final boolean[] settled;
+    /** The one bin a piece may move to, or -1 for any open bin (the default). */
+    final int[] home;
     private final double[][] pair;
     private final double[][] weight;
     private final double[] out;
@@ -72,6 +74,8 @@ final class Separator {
         this.bin = new int[n];
         this.fixed = new boolean[n];
         this.settled = new boolean[n];
+        this.home = new int[n];
+        java.util.Arrays.fill(home, -1);
         this.boxes = boxes;
         this.open = new boolean[boxes.length];
         java.util.Arrays.fill(open, true);
@@ -260,7 +264,7 @@ final class Separator {
         }
         SearchShape sh = shapes[i];
         for (int k = 0; k < BIN_SAMPLES; k++) {
-            int b = randomOpenBin();
+            int b = home[i] >= 0 ? home[i] : randomOpenBin();
             double a = angles.sample(rnd);
             probe.set(sh, 0, 0, a);
             double[] bx = boxes[b];

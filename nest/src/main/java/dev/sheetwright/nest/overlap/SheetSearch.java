@@ -1,8 +1,11 @@
 package dev.sheetwright.nest.overlap;
 
+import java.time.Duration;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
+import java.util.OptionalLong;
 import java.util.SplittableRandom;
 
 import org.locationtech.jts.geom.Envelope;
@@ -11,13 +14,16 @@ import org.locationtech.jts.geom.Polygon;
 
 import dev.sheetwright.nest.check.NestChecker;
 import dev.sheetwright.nest.model.NestFailure;
-import dev.sheetwright.nest.model.NestRanking;
 import dev.sheetwright.nest.model.NestOptions;
+import dev.sheetwright.nest.model.NestPrecision;
+import dev.sheetwright.nest.model.NestRanking;
 import dev.sheetwright.nest.model.NestRequest;
 import dev.sheetwright.nest.model.NestResult;
 import dev.sheetwright.nest.model.Placement;
+import dev.sheetwright.nest.model.ProgressListener;
 import dev.sheetwright.nest.model.Sheet;
 import dev.sheetwright.nest.model.SheetLayout;
+import dev.sheetwright.nest.model.Stock;
 import dev.sheetwright.nest.place.Nester;
 
 /**
@@ -29,8 +35,12 @@ import dev.sheetwright.nest.place.Nester;
  * the emptiest first; then {@link #DESTINATIONS} of them a thorough one ({@link #ATTEMPT_MOVES}). When every part
  * has left, the sheet closes and the next least filled one is emptied. A part that stays keeps the sheet open; the
  * parts that moved stay moved (the layout is feasible after every insertion, and the sheet only emptier), and the
- * next round tries again with the thorough tries on sheets chosen at random. A worker stops after
- * {@link #STALE_ROUNDS} rounds in a row that move no part, or when the budget is spent.
+ * next round tries again with the thorough tries on sheets chosen at random. A part too large for any sheet may
+ * trade places: it goes onto a sheet whose smaller parts may leave for the sheet being emptied, if they bring less
+ * area than it takes away. Emptying stops when {@link #ELIMINATION_SHARE} of the budget is spent, or when no sheet
+ * has room by area for any part of the sheet to empty; the rest compacts the last open sheet toward its near end,
+ * for the largest offcut there. Layouts are ranked by {@link NestRanking}, so a worker that empties no sheet may
+ * still leave a larger offcut on the last.
  *
  * <p>Separating on one sheet at a time keeps each separation small (a sheet's parts, not the job's), so it is fast
  * enough on jobs of hundreds of parts.
@@ -54,12 +64,15 @@ public final class SheetSearch {
     public static final int MAX_COPIES = 1500;
     /** Most open sheets a part is offered to, in one try to empty a sheet. */
     static final int DESTINATIONS = 4;
+    /** Share of a worker's budget for emptying sheets; the rest compacts the last sheet. */
+    static final double ELIMINATION_SHARE = 0.9;
+    /** First cut when compacting the last sheet, as a share of its used length. */
+    static final double COMPACT_FIRST_CUT = 0.05;
+    static final double COMPACT_SMALLEST_CUT = 0.002;
     /** Most piece moves a quick insertion may take to separate. */
     static final long QUICK_MOVES = 100;
     /** Most piece moves one insertion may take to separate. */
     static final long ATTEMPT_MOVES = 3000;
-    /** Rounds in a row that move no part before a worker gives up. */
-    static final int STALE_ROUNDS = 3;
 
     private static final GeometryFactory GF = new GeometryFactory();
 
@@ -161,7 +174,7 @@ public final class SheetSearch {
      * (README, nesting benchmarks), at 10 s it left a smaller offcut on the last sheet and saved no sheet, at 30 s
      * and 60 s it saved one of twelve on riverside-300.
      */
-    public static final java.time.Duration WORTHWHILE = java.time.Duration.ofSeconds(30);
+    public static final Duration WORTHWHILE = Duration.ofSeconds(30);
 
     /**
      * Whether a job's nest searches sheets when not told: a timed run of at least {@link #WORTHWHILE} (a run of fixed
@@ -177,11 +190,10 @@ public final class SheetSearch {
     /**
      * A nest of {@code request} in two stages: the no-fit-polygon engine ({@link Nester}) makes the first layout in
      * {@link #FIRST_LAYOUT_SHARE} of the time (with an iteration count: all its steps), then {@link #eliminate} tries
-     * to empty sheets in the rest (with an iteration count: as many piece moves). A timed run on two threads or more
-     * gives one of them in the second stage to another run of the first engine from another seed, and the better
-     * nest by {@link NestRanking} wins (ties to the sheet search): a second chance at the first layout's tie-breaks
-     * (the last sheet's offcut) when no sheet could be emptied. When the sheet search does not apply (no sheets, or
-     * more than {@link #MAX_COPIES} copies) the first engine gets all the time.
+     * to empty sheets in the rest (with an iteration count: as many piece moves). When the first layout has no more
+     * sheets than the area of its parts needs ({@link #roomToEmpty}), a timed run gives the rest to another run of
+     * the first engine from another seed instead, and the better nest by {@link NestRanking} wins. When the sheet
+     * search does not apply (no sheets, or more than {@link #MAX_COPIES} copies) the first engine gets all the time.
      *
      * @throws NestFailure if the sheet search fails (a bug)
      */
@@ -191,34 +203,39 @@ public final class SheetSearch {
         }
         long deadline = System.nanoTime() + Math.min(options.timeLimit().toNanos(), Long.MAX_VALUE / 4);
         NestResult start = Nester.nest(request, options.share(FIRST_LAYOUT_SHARE));
-        boolean portfolio = options.iterations().isEmpty() && options.threads() >= 2;
-        if (!portfolio) {
-            return eliminateOrFail(request, start, options, deadline);
+        if (options.iterations().isEmpty() && !roomToEmpty(request, start)) {
+            // every sheet is needed by area alone: the rest of the time goes to another run of the first engine
+            long left = Math.max(0, deadline - System.nanoTime());
+            NestResult again = Nester.nest(request, new NestOptions(Duration.ofNanos(left),
+                    OptionalLong.empty(), LogicalWorkers.seedOf(options.seed(), 0), options.threads(),
+                    ProgressListener.NONE));
+            return NestRanking.BEST_FIRST.compare(again, start) < 0 ? again : start;
         }
-        NestOptions searchOptions = new NestOptions(options.timeLimit(), options.iterations(), options.seed(),
-                options.threads() - 1, options.listener());
-        long left = Math.max(0, deadline - System.nanoTime());
-        NestOptions againOptions = NestOptions.timed(java.time.Duration.ofNanos(left),
-                LogicalWorkers.seedOf(options.seed(), options.threads()), 1);
-        java.util.concurrent.ExecutorService ex = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
-            Thread t = new Thread(r, "first-layout-again");
-            t.setDaemon(true);
-            return t;
-        });
-        try {
-            java.util.concurrent.Future<NestResult> again = ex.submit(() -> Nester.nest(request, againOptions));
-            NestResult searched = eliminateOrFail(request, start, searchOptions, deadline);
-            NestResult other = again.get();
-            return NestRanking.BEST_FIRST.compare(other, searched) < 0 ? other : searched;
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new NestFailure("nesting was interrupted", e);
-        } catch (java.util.concurrent.ExecutionException e) {
-            Throwable c = e.getCause();
-            throw c instanceof NestFailure nf ? nf : new NestFailure("the nesting engine failed (a bug; nothing was written): " + c, c);
-        } finally {
-            ex.shutdownNow();
+        return eliminateOrFail(request, start, options, deadline);
+    }
+
+    /**
+     * Whether a sheet of {@code nest} might be emptied: it has more sheet layouts than the area of their parts needs
+     * (that area over the usable area, less the margin, of the largest sheet, rounded up).
+     */
+    static boolean roomToEmpty(NestRequest request, NestResult nest) {
+        double margin = request.rules().margin();
+        double usable = 0;
+        for (Stock st : request.stock()) {
+            if (st instanceof Sheet s) {
+                usable = Math.max(usable, Math.max(0, s.width() - 2 * margin) * Math.max(0, s.height() - 2 * margin));
+            }
         }
+        int sheets = 0;
+        double partArea = 0;
+        for (SheetLayout l : nest.sheets()) {
+            if (l.stock() instanceof Sheet) {
+                sheets++;
+                partArea += l.utilization() * l.stockArea();
+            }
+        }
+        // the area ratio rounded up, an exact whole number of sheets within the precision of totals counting as that many
+        return usable > 0 && sheets > Math.ceil(partArea / usable * (1 - NestPrecision.RELATIVE_TIE));
     }
 
     private static NestResult eliminateOrFail(NestRequest request, NestResult start, NestOptions options, long deadline) {
@@ -257,25 +274,22 @@ public final class SheetSearch {
         Progress progress = new Progress(options, binLayouts.size());
         List<Found> results = LogicalWorkers.run("sheet-search", workers, options.threads(), options.seed(),
                 seed -> () -> new Worker(seed, new Separator.Budget(deadline, perWorker), progress).call());
-        List<Found> ranked = new ArrayList<>();
+        // the best by the shop's ranking that passes the checker; ties keep the start, then the lowest worker
+        NestResult best = start;
         for (Found f : results) {
-            if (f != null) {
-                ranked.add(f);
+            if (f == null) {
+                continue;
             }
-        }
-        // stable sort: ties keep the lowest worker first
-        ranked.sort(Comparator.comparingInt(Found::sheets).thenComparingDouble(Found::cost));
-        for (Found f : ranked) {
             NestResult r = toResult(f);
-            if (NestChecker.check(request, r).isEmpty()) {
-                return r;
+            if (NestRanking.BEST_FIRST.compare(r, best) < 0 && NestChecker.check(request, r).isEmpty()) {
+                best = r;
             }
         }
-        return start;
+        return best;
     }
 
-    /** The poses of a worker's best layout, its open bins, sheets and cost. */
-    record Found(double[][] poses, boolean[] open, int sheets, double cost) {
+    /** The poses of a worker's layout and its open bins. */
+    record Found(double[][] poses, boolean[] open) {
     }
 
     private double costOf(boolean[] open) {
@@ -373,12 +387,15 @@ public final class SheetSearch {
      */
     private final class Worker {
         private final SplittableRandom rnd;
-        private final Separator.Budget budget;
+        /** The budget of the phase under way. */
+        private Separator.Budget budget;
         private final Progress progress;
         private double[][] pose;
         private final boolean[] open = new boolean[boxes.length];
         private final PlacedShape scratch = new PlacedShape();
         private long moves;
+        /** Whether any part moved. */
+        private boolean changed;
 
         Worker(long seed, Separator.Budget budget, Progress progress) {
             this.rnd = new SplittableRandom(seed);
@@ -401,37 +418,117 @@ public final class SheetSearch {
                 // settled (what it overlaps there is forgiven) until it moves
                 pose[i] = new double[] {partBin.get(i), ref[0], ref[1], p.rotationDeg(), partFixed[i] ? 0 : 1};
             }
-            java.util.Arrays.fill(open, true);
-            int startSheets = count(open);
+            Arrays.fill(open, true);
+            Separator.Budget whole = budget;
+            budget = share(whole, ELIMINATION_SHARE);
             int round = 0;
-            int stale = 0;
-            while (!spent() && stale < STALE_ROUNDS) {
+            while (!spent()) {
                 List<Integer> candidates = emptiable();
                 if (candidates.isEmpty()) {
                     break;
                 }
                 // only the least filled sheet: parts leaving another could only fill it up again
                 int t = candidates.get(0);
-                int before = partsOn(t);
-                boolean moved = empty(t, round);
-                if (moved) {
+                long movesBefore = moves;
+                if (empty(t, round)) {
                     progress.found(moves, open, lastLength());
                 }
-                moved |= partsOn(t) < before;
-                stale = moved ? 0 : stale + 1;
+                if (moves == movesBefore) {
+                    break; // no sheet has room for any of its parts
+                }
                 round++;
             }
-            int sheets = count(open);
-            return sheets < startSheets ? new Found(pose, open.clone(), sheets, costOf(open)) : null;
+            budget = whole;
+            compactLast();
+            return changed ? new Found(pose, open.clone()) : null;
         }
 
-        /** How many parts are on sheet b. */
-        private int partsOn(int b) {
-            int c = 0;
-            for (double[] p : pose) {
-                c += (int) p[0] == b ? 1 : 0;
+        /** {@code fraction} of what is left of {@code whole}, from now. */
+        private Separator.Budget share(Separator.Budget whole, double fraction) {
+            long now = System.nanoTime();
+            long deadline = whole.deadline() >= Long.MAX_VALUE / 2 ? whole.deadline()
+                    : now + (long) (Math.max(0, whole.deadline() - now) * fraction);
+            long limit = whole.moveLimit() >= Long.MAX_VALUE / 2 ? whole.moveLimit()
+                    : moves + (long) ((whole.moveLimit() - moves) * fraction);
+            return new Separator.Budget(deadline, limit);
+        }
+
+        /**
+         * Compacts the last open sheet toward its near end, for the largest offcut there: its bin is cut shorter (the
+         * parts right of a random line move left by the cut) and separated on that sheet, {@link #COMPACT_FIRST_CUT}
+         * of the used length at first, halving after two failures, until {@link #COMPACT_SMALLEST_CUT} or the budget.
+         * A sheet with a part holding others in its holes is left as it is.
+         */
+        private void compactLast() {
+            int last = -1;
+            for (int b = 0; b < open.length; b++) {
+                if (open[b]) {
+                    last = b;
+                }
             }
-            return c;
+            if (last < 0 || spent() || !held.get(last).isEmpty()) {
+                return;
+            }
+            List<Integer> local = new ArrayList<>();
+            for (int i = 0; i < pose.length; i++) {
+                if ((int) pose[i][0] == last) {
+                    if (partFixed[i]) {
+                        return;
+                    }
+                    local.add(i);
+                }
+            }
+            int m = local.size();
+            if (m == 0) {
+                return;
+            }
+            SearchShape[] ls = new SearchShape[m];
+            for (int k = 0; k < m; k++) {
+                ls[k] = shapes[local.get(k)];
+            }
+            Separator sep = new Separator(ls, new double[][] {boxes[last].clone()}, measure, angles, rnd, precision);
+            for (int k = 0; k < m; k++) {
+                double[] p = pose[local.get(k)];
+                sep.place(k, 0, p[1], p[2], p[3]);
+                sep.settled[k] = p[4] != 0;
+            }
+            double near = boxes[last][0];
+            double startLength = sep.reach(0);
+            double bestLength = startLength;
+            double[][] best = sep.snapshot();
+            Separator.Budget inside = new Separator.Budget(budget.deadline(), budget.moveLimit() - moves);
+            double cut = COMPACT_FIRST_CUT;
+            int fails = 0;
+            while (cut >= COMPACT_SMALLEST_CUT && !inside.spent(sep.moves())) {
+                sep.restore(best);
+                sep.cutBin(0, bestLength, near + (bestLength - near) * (1 - cut));
+                sep.resetWeights();
+                if (sep.separate(inside) && sep.reach(0) < bestLength) {
+                    best = sep.snapshot();
+                    bestLength = sep.reach(0);
+                    fails = 0;
+                } else if (++fails >= 2) {
+                    cut /= 2;
+                    fails = 0;
+                }
+            }
+            moves += sep.moves();
+            if (bestLength < startLength) {
+                for (int k = 0; k < m; k++) {
+                    double[] b = best[k];
+                    pose[local.get(k)] = new double[] {last, b[1], b[2], b[3], b[4]};
+                }
+                changed = true;
+            }
+        }
+
+        /** Search-shape area of the parts on sheet b. */
+        private double areaOn(int b) {
+            double a = 0;
+            for (int i = 0; i < pose.length; i++) {
+                a += (int) pose[i][0] == b ? shapes[i].area : 0;
+            }
+            return a;
         }
 
         /**
@@ -469,13 +566,18 @@ public final class SheetSearch {
                     for (int k = 0; k < Math.min(DESTINATIONS, dests.size()) && !placed && !spent(); k++) {
                         placed = insert(q, dests.get(k), ATTEMPT_MOVES);
                     }
+                    for (int k = 0; k < Math.min(DESTINATIONS, dests.size()) && !placed && !spent(); k++) {
+                        placed = trade(q, t, dests.get(k), ATTEMPT_MOVES);
+                    }
                 }
                 all &= placed;
             }
-            if (all) {
+            // a trade may have brought smaller parts over: the sheet is empty only when nothing is left on it
+            if (all && areaOn(t) == 0) {
                 open[t] = false;
+                return true;
             }
-            return all;
+            return false;
         }
 
         /** The open sheets other than t with room for part q by area, the emptiest first. */
@@ -531,8 +633,64 @@ public final class SheetSearch {
                     PlacedShape at = sep.at[k];
                     pose[local.get(k)] = new double[] {d, at.x, at.y, at.angle, sep.settled[k] ? 1 : 0};
                 }
+                changed = true;
             }
             return ok;
+        }
+
+        /**
+         * A trade: part q (on sheet t) goes onto sheet d, and parts of d smaller than q may leave for t to make room
+         * (a separation over both sheets: q stays on d, the parts of t on t, d's parts at least as large as q on
+         * d). Kept when it separates and what came over to t has less area than q, so t ends with less on it; the
+         * smaller parts that came are easier to place elsewhere.
+         */
+        private boolean trade(int q, int t, int d, long most) {
+            List<Integer> local = new ArrayList<>();
+            for (int i = 0; i < pose.length; i++) {
+                int b = (int) pose[i][0];
+                if ((b == d || b == t) && i != q) {
+                    local.add(i);
+                }
+            }
+            local.add(q);
+            int m = local.size();
+            SearchShape[] ls = new SearchShape[m];
+            for (int k = 0; k < m; k++) {
+                ls[k] = shapes[local.get(k)];
+            }
+            Separator sep = new Separator(ls, new double[][] {boxes[d].clone(), boxes[t].clone()}, measure, angles,
+                    rnd, precision);
+            for (int k = 0; k < m; k++) {
+                int i = local.get(k);
+                double[] p = pose[i];
+                boolean onD = i == q || (int) p[0] == d;
+                sep.place(k, onD ? 0 : 1, p[1], p[2], p[3]);
+                sep.fixed[k] = partFixed[i];
+                sep.settled[k] = i != q && p[4] != 0;
+                sep.home[k] = i == q ? 0 : !onD ? 1 : shapes[i].area >= shapes[q].area ? 0 : -1;
+            }
+            sep.reinsert(m - 1);
+            long limit = Math.min(most, budget.moveLimit() - moves);
+            boolean ok = sep.separate(new Separator.Budget(budget.deadline(), limit));
+            moves += sep.moves();
+            if (!ok) {
+                return false;
+            }
+            double came = 0;
+            for (int k = 0; k < m - 1; k++) {
+                if ((int) pose[local.get(k)][0] == d && sep.bin[k] == 1) {
+                    came += ls[k].area;
+                }
+            }
+            if (!(came < shapes[q].area)) {
+                return false;
+            }
+            for (int k = 0; k < m; k++) {
+                PlacedShape at = sep.at[k];
+                pose[local.get(k)] = new double[] {sep.bin[k] == 0 ? d : t, at.x, at.y, at.angle, sep.settled[k] ? 1 : 0};
+            }
+            changed = true;
+            return true;
         }
 
         /** How far the search shapes on the last open sheet reach along x, less the half gap they carry, plus the margin. */

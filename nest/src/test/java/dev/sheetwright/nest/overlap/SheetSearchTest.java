@@ -182,4 +182,31 @@ class SheetSearchTest {
         assertTrue(!SheetSearch.byDefault(NestOptions.timed(java.time.Duration.ofSeconds(10), 1, 2)));
         assertTrue(!SheetSearch.byDefault(NestOptions.steps(100000, 1, 2)));
     }
+
+    @Test
+    void aPartTooLargeForAnyHoleTradesPlacesWithASmallerOne() {
+        // sheet A: a 7 x 8 plate and a 3 x 3 square in the strip right of it; sheet B: a 3.4 x 8 slat. The slat fits
+        // that strip only once the square has gone, and the square fits nowhere else on A: the two trade sheets.
+        List<NestPiece> pieces = List.of(
+                NestPiece.of("PL", "plate", 1, Shapes.rect(0, 0, 7, 8)),
+                NestPiece.of("SQ", "square", 1, Shapes.rect(0, 0, 3, 3)),
+                NestPiece.of("SL", "slat", 1, Shapes.rect(0, 0, 3.4, 8)));
+        List<Stock> stock = List.of(SHEET);
+        NestRequest req = new NestRequest(pieces, stock, new NestRules(0.25, 0.5, RotationRule.quarter(), false, 0.01),
+                NestPrecision.ofScale(NestPrecision.scaleOf(pieces, stock)));
+        NestResult start = new NestResult(List.of(
+                new SheetLayout(SHEET, 0, 11.5, List.of(new Placement("PL", "plate", 0, 0.5, 0.5, 0, false),
+                        new Placement("SQ", "square", 0, 8, 0.5, 0, false)), null, 0.54),
+                new SheetLayout(SHEET, 1, 4.4, List.of(new Placement("SL", "slat", 0, 0.5, 0.5, 0, false)), null, 0.23)),
+                List.of());
+        assertTrue(NestChecker.check(req, start).isEmpty(), "feasible start: " + NestChecker.check(req, start));
+        NestResult r = SheetSearch.eliminate(req, start, NestOptions.steps(20000, 2, 1), Long.MAX_VALUE);
+        assertEquals(2, sheetsOf(r), "the three parts need two sheets");
+        assertTrue(NestChecker.check(req, r).isEmpty(), "checker: " + NestChecker.check(req, r));
+        List<String> first = r.sheets().get(0).parts().stream().map(Placement::fitting).sorted().toList();
+        List<String> last = r.sheets().get(1).parts().stream().map(Placement::fitting).toList();
+        assertEquals(List.of("PL", "SL"), first, "the slat went onto the plate's sheet");
+        assertEquals(List.of("SQ"), last, "the square went to the last sheet");
+        assertTrue(r.sheets().get(1).usedLength() < start.sheets().get(1).usedLength(), "a larger offcut is left");
+    }
 }
