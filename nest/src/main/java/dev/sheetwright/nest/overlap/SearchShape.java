@@ -38,12 +38,20 @@ public final class SearchShape {
 
     private static final GeometryFactory GF = new GeometryFactory();
     /**
-     * How outlines grow: mitred corners, bevelled at {@link #MITRE_LIMIT} times the distance (a bevel that far out
-     * still covers the round offset), so the grown ring covers every point within the distance of the outline.
+     * Segments a quadrant of a grown outline's round corners. The buffer rounds a corner's segment count to the
+     * nearest whole number, so one chord may span up to 1.5 times a segment's angle: the growth is widened by
+     * 1 / cos(3 pi / (8 x this)) (1.1 % at 8) so that every chord lies outside the true offset and the grown ring
+     * covers every point within the growth of the outline.
      */
-    static final double MITRE_LIMIT = 2;
-    private static final BufferParameters GROW_JOIN = new BufferParameters(2, BufferParameters.CAP_FLAT,
-            BufferParameters.JOIN_MITRE, MITRE_LIMIT);
+    static final int GROW_SEGMENTS = 8;
+
+    /** Round corners of {@link #GROW_SEGMENTS}, and no simplification of the input (which may cut inside it). */
+    private static BufferParameters growParameters() {
+        BufferParameters p = new BufferParameters(GROW_SEGMENTS, BufferParameters.CAP_FLAT, BufferParameters.JOIN_ROUND,
+                BufferParameters.DEFAULT_MITRE_LIMIT);
+        p.setSimplifyFactor(0);
+        return p;
+    }
 
     final double[] xs;
     final double[] ys;
@@ -91,9 +99,11 @@ public final class SearchShape {
             throw new IllegalArgumentException("grow must be >= 0 and precision > 0, got " + grow + ", " + precision);
         }
         Polygon shell = GF.createPolygon(outline.getExteriorRing().getCoordinates());
-        // mitred corners: a rounded buffer's chords cut inside the true offset at a convex corner (by up to 8 % of
-        // the distance with two segments a quadrant), which would let a part at an angle come closer than the gap
-        Polygon grown = grow > 0 ? largest(BufferOp.bufferOp(shell, grow, GROW_JOIN)) : shell;
+        // a round buffer's chords cut inside the true offset at a convex corner (by up to 8 % of the distance with
+        // two segments a quadrant), which would let a part turned to an angle come closer than the gap: the buffer
+        // is drawn finer and its distance widened so that its chords lie outside the offset (see GROW_SEGMENTS)
+        Polygon grown = grow > 0 ? largest(BufferOp.bufferOp(shell, grow / Math.cos(3 * Math.PI / (8 * GROW_SEGMENTS)),
+                growParameters())) : shell;
         Polygon simple = simplifyOutward(grown, precision);
         if (grow > 0 || simple != grown) {
             simple = mitred(simple);

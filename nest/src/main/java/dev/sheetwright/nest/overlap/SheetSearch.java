@@ -7,6 +7,10 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.OptionalLong;
 import java.util.SplittableRandom;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.GeometryFactory;
@@ -37,7 +41,7 @@ import dev.sheetwright.nest.place.Nester;
  * parts that moved stay moved (the layout is feasible after every insertion, and the sheet only emptier), and the
  * next round tries again with the thorough tries on sheets chosen at random. A part too large for any sheet may
  * trade places: it goes onto a sheet whose smaller parts may leave for the sheet being emptied, if they bring less
- * area than it takes away. Emptying stops when {@link #ELIMINATION_SHARE} of the budget is spent, or when no sheet
+ * area than it takes away or are much smaller. Emptying stops when {@link #ELIMINATION_SHARE} of the budget is spent, or when no sheet
  * has room by area for any part of the sheet to empty; the rest compacts the last open sheet toward its near end,
  * for the largest offcut there. Layouts are ranked by {@link NestRanking}, so a worker that empties no sheet may
  * still leave a larger offcut on the last.
@@ -65,10 +69,15 @@ public final class SheetSearch {
     /** Most open sheets a part is offered to, in one try to empty a sheet. */
     static final int DESTINATIONS = 4;
     /** Share of a worker's budget for emptying sheets; the rest compacts the last sheet. */
-    static final double ELIMINATION_SHARE = 0.9;
+    static final double ELIMINATION_SHARE = 0.95;
     /** First cut when compacting the last sheet, as a share of its used length. */
     static final double COMPACT_FIRST_CUT = 0.05;
     static final double COMPACT_SMALLEST_CUT = 0.002;
+    /**
+     * A trade may bring more area to the sheet being emptied than it takes away only in parts each at most this share
+     * of the part that left (parts that much smaller find room elsewhere more easily).
+     */
+    static final double SMALLER_SHARE = 0.5;
     /** Most piece moves a quick insertion may take to separate. */
     static final long QUICK_MOVES = 100;
     /** Most piece moves one insertion may take to separate. */
@@ -211,7 +220,36 @@ public final class SheetSearch {
                     ProgressListener.NONE));
             return NestRanking.BEST_FIRST.compare(again, start) < 0 ? again : start;
         }
-        return eliminateOrFail(request, start, options, deadline);
+        if (options.iterations().isPresent() || options.threads() < 2) {
+            return eliminateOrFail(request, start, options, deadline);
+        }
+        // one worker searches sheets (a deep search: one worker with a core to itself goes further than two
+        // sharing), another thread runs the first engine again, and the better nest wins
+        NestOptions searchOptions = new NestOptions(options.timeLimit(), options.iterations(), options.seed(),
+                options.threads() - 1, options.listener());
+        long left = Math.max(0, deadline - System.nanoTime());
+        NestOptions againOptions = new NestOptions(Duration.ofNanos(left), OptionalLong.empty(),
+                LogicalWorkers.seedOf(options.seed(), 0), 1, ProgressListener.NONE);
+        ExecutorService ex = Executors.newSingleThreadExecutor(r -> {
+            Thread th = new Thread(r, "first-layout-again");
+            th.setDaemon(true);
+            return th;
+        });
+        try {
+            Future<NestResult> again = ex.submit(() -> Nester.nest(request, againOptions));
+            NestResult searched = eliminateOrFail(request, start, searchOptions, deadline);
+            NestResult other = again.get();
+            return NestRanking.BEST_FIRST.compare(other, searched) < 0 ? other : searched;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new NestFailure("nesting was interrupted", e);
+        } catch (ExecutionException e) {
+            Throwable c = e.getCause();
+            throw c instanceof NestFailure nf ? nf
+                    : new NestFailure("the nesting engine failed (a bug; nothing was written): " + c, c);
+        } finally {
+            ex.shutdownNow();
+        }
     }
 
     /**
@@ -532,11 +570,12 @@ public final class SheetSearch {
         }
 
         /**
-         * Tries to move every part of sheet t onto the other open sheets, largest first, each by {@link #insert}:
-         * first a quick try on every sheet with room for it (a part that fits a hole there, or nearly), then a
-         * thorough one on {@link #DESTINATIONS} sheets (the emptiest in a first round, else chosen at random). Once
-         * a part stays, the rest get the quick tries only. Returns whether t was emptied (it then closes); parts
-         * that moved stay moved either way (the layout stays feasible and t only emptier).
+         * Tries to move every part of sheet t onto the other open sheets, largest first (large parts before small
+         * ones take the room): a quick {@link #insert} on every sheet with room for it (a part that fits a hole
+         * there, or nearly); for the first part that stays, a thorough insert on {@link #DESTINATIONS} sheets (the
+         * emptiest in a first round, else chosen at random) and else a {@link #trade}; once a part stays, the rest
+         * get the quick tries only. Returns whether t was emptied (it then closes); parts that moved stay moved
+         * either way (the layout stays feasible and t only emptier).
          */
         private boolean empty(int t, int round) {
             List<Integer> mine = new ArrayList<>();
@@ -557,6 +596,7 @@ public final class SheetSearch {
                     placed = insert(q, dests.get(k), QUICK_MOVES);
                 }
                 if (!placed && all) {
+                    // the first part to stay gets the costly tries, before smaller parts take the room
                     if (round > 0) {
                         for (int k = dests.size() - 1; k > 0; k--) {
                             int j = rnd.nextInt(k + 1);
@@ -566,14 +606,14 @@ public final class SheetSearch {
                     for (int k = 0; k < Math.min(DESTINATIONS, dests.size()) && !placed && !spent(); k++) {
                         placed = insert(q, dests.get(k), ATTEMPT_MOVES);
                     }
-                    for (int k = 0; k < Math.min(DESTINATIONS, dests.size()) && !placed && !spent(); k++) {
+                    for (int k = 0; k < Math.min(DESTINATIONS, dests.size()) && !placed && !spent() && round > 0; k++) {
                         placed = trade(q, t, dests.get(k), ATTEMPT_MOVES);
                     }
                 }
                 all &= placed;
             }
             // a trade may have brought smaller parts over: the sheet is empty only when nothing is left on it
-            if (all && areaOn(t) == 0) {
+            if (areaOn(t) == 0) {
                 open[t] = false;
                 return true;
             }
@@ -641,8 +681,8 @@ public final class SheetSearch {
         /**
          * A trade: part q (on sheet t) goes onto sheet d, and parts of d smaller than q may leave for t to make room
          * (a separation over both sheets: q stays on d, the parts of t on t, d's parts at least as large as q on
-         * d). Kept when it separates and what came over to t has less area than q, so t ends with less on it; the
-         * smaller parts that came are easier to place elsewhere.
+         * d). Kept when it separates and what came over to t has less area than q (t ends with less on it), or comes
+         * in parts each at most {@link #SMALLER_SHARE} of q, easier to place elsewhere.
          */
         private boolean trade(int q, int t, int d, long most) {
             List<Integer> local = new ArrayList<>();
@@ -677,12 +717,14 @@ public final class SheetSearch {
                 return false;
             }
             double came = 0;
+            double largest = 0;
             for (int k = 0; k < m - 1; k++) {
                 if ((int) pose[local.get(k)][0] == d && sep.bin[k] == 1) {
                     came += ls[k].area;
+                    largest = Math.max(largest, ls[k].area);
                 }
             }
-            if (!(came < shapes[q].area)) {
+            if (!(came < shapes[q].area || largest <= shapes[q].area * SMALLER_SHARE)) {
                 return false;
             }
             for (int k = 0; k < m; k++) {
