@@ -34,17 +34,18 @@ import dev.sheetwright.nest.place.Nester;
  * Sheet elimination: takes a feasible nest on sheets (and remnants) and empties sheets one at a time. The sheet to
  * empty is the least filled one (by part area; on a tie the later one). Its parts go, largest first, one at a time
  * onto another open sheet: the part is put where it overlaps least among places sampled there, and a {@link Separator}
- * over that sheet's parts alone (all of them may move, within the sheet) removes the overlap. First each sheet with
- * room for the part by area gets a quick try ({@link #QUICK_MOVES} piece moves: a part that fits a hole, or nearly),
- * the emptiest first; then {@link #DESTINATIONS} of them a thorough one ({@link #ATTEMPT_MOVES}). When every part
- * has left, the sheet closes and the next least filled one is emptied. A part that stays keeps the sheet open; the
- * parts that moved stay moved (the layout is feasible after every insertion, and the sheet only emptier), and the
- * next round tries again with the thorough tries on sheets chosen at random. A part too large for any sheet may
- * trade places: it goes onto a sheet whose smaller parts may leave for the sheet being emptied, if they bring less
- * area than it takes away or are much smaller. Emptying stops when {@link #ELIMINATION_SHARE} of the budget is spent, or when no sheet
- * has room by area for any part of the sheet to empty; the rest compacts the last open sheet toward its near end,
- * for the largest offcut there. Layouts are ranked by {@link NestRanking}, so a worker that empties no sheet may
- * still leave a larger offcut on the last.
+ * over that sheet's parts alone (all of them may move, within the sheet) removes the overlap. Each part first gets a
+ * quick try ({@link #QUICK_MOVES} piece moves: a part that fits a hole, or nearly) on every sheet with room for it by
+ * area, the emptiest first; the first part that stays then gets a thorough try ({@link #ATTEMPT_MOVES}) on
+ * {@link #DESTINATIONS} of them, before smaller parts take the room. When every part has left, the sheet closes and
+ * the next least filled one is emptied. A part that stays keeps the sheet open; the parts that moved stay moved (the
+ * layout is feasible after every insertion, and the sheet only emptier), and the next round tries again with the
+ * thorough tries on sheets chosen at random and, from the second round on, trades: the part goes onto a sheet whose
+ * smaller parts may leave for the sheet being emptied, if they bring less area than it takes away or are much
+ * smaller. Emptying stops when {@link #ELIMINATION_SHARE} of the budget is spent, or when no sheet has room by area
+ * for any part of the sheet to empty; the rest compacts the last open sheet toward its near end, for the largest
+ * offcut there. Layouts are ranked by {@link NestRanking}, so a worker that empties no sheet may still leave a larger
+ * offcut on the last.
  *
  * <p>Separating on one sheet at a time keeps each separation small (a sheet's parts, not the job's), so it is fast
  * enough on jobs of hundreds of parts.
@@ -201,8 +202,10 @@ public final class SheetSearch {
      * {@link #FIRST_LAYOUT_SHARE} of the time (with an iteration count: all its steps), then {@link #eliminate} tries
      * to empty sheets in the rest (with an iteration count: as many piece moves). When the first layout has no more
      * sheets than the area of its parts needs ({@link #roomToEmpty}), a timed run gives the rest to another run of
-     * the first engine from another seed instead, and the better nest by {@link NestRanking} wins. When the sheet
-     * search does not apply (no sheets, or more than {@link #MAX_COPIES} copies) the first engine gets all the time.
+     * the first engine from another seed instead, and the better nest by {@link NestRanking} wins. Else a timed run
+     * on two threads or more searches sheets on all but one, and the last runs the first engine again meanwhile (the
+     * better nest wins). When the sheet search does not apply (no sheets, or more than {@link #MAX_COPIES} copies)
+     * the first engine gets all the time.
      *
      * @throws NestFailure if the sheet search fails (a bug)
      */
