@@ -510,29 +510,12 @@ public final class SheetSearch {
             if (last < 0 || spent() || !held.get(last).isEmpty()) {
                 return;
             }
-            List<Integer> local = new ArrayList<>();
-            for (int i = 0; i < pose.length; i++) {
-                if ((int) pose[i][0] == last) {
-                    if (partFixed[i]) {
-                        return;
-                    }
-                    local.add(i);
-                }
-            }
+            List<Integer> local = partsOn(last);
             int m = local.size();
-            if (m == 0) {
+            if (m == 0 || local.stream().anyMatch(i -> partFixed[i])) {
                 return;
             }
-            SearchShape[] ls = new SearchShape[m];
-            for (int k = 0; k < m; k++) {
-                ls[k] = shapes[local.get(k)];
-            }
-            Separator sep = new Separator(ls, new double[][] {boxes[last].clone()}, measure, angles, rnd, precision);
-            for (int k = 0; k < m; k++) {
-                double[] p = pose[local.get(k)];
-                sep.place(k, 0, p[1], p[2], p[3]);
-                sep.settled[k] = p[4] != 0;
-            }
+            Separator sep = over(local, new int[] {last});
             double near = boxes[last][0];
             double startLength = sep.reach(0);
             double bestLength = startLength;
@@ -647,36 +630,16 @@ public final class SheetSearch {
          * them may move, within d only); on success the poses take the separated layout.
          */
         private boolean insert(int q, int d, long most) {
-            List<Integer> local = new ArrayList<>();
-            for (int i = 0; i < pose.length; i++) {
-                if ((int) pose[i][0] == d) {
-                    local.add(i);
-                }
-            }
+            List<Integer> local = partsOn(d);
             local.add(q);
+            int[] sheets = {d};
+            Separator sep = over(local, sheets);
             int m = local.size();
-            SearchShape[] ls = new SearchShape[m];
-            for (int k = 0; k < m; k++) {
-                ls[k] = shapes[local.get(k)];
-            }
-            Separator sep = new Separator(ls, new double[][] {boxes[d].clone()}, measure, angles, rnd, precision);
-            for (int k = 0; k < m; k++) {
-                int i = local.get(k);
-                double[] p = pose[i];
-                sep.place(k, 0, p[1], p[2], p[3]);
-                sep.fixed[k] = partFixed[i];
-                sep.settled[k] = i != q && p[4] != 0;
-            }
+            sep.settled[m - 1] = false;
             sep.reinsert(m - 1);
-            long limit = Math.min(most, budget.moveLimit() - moves);
-            boolean ok = sep.separate(new Separator.Budget(budget.deadline(), limit));
-            moves += sep.moves();
+            boolean ok = separate(sep, most);
             if (ok) {
-                for (int k = 0; k < m; k++) {
-                    PlacedShape at = sep.at[k];
-                    pose[local.get(k)] = new double[] {d, at.x, at.y, at.angle, sep.settled[k] ? 1 : 0};
-                }
-                changed = true;
+                takePoses(sep, local, sheets);
             }
             return ok;
         }
@@ -696,46 +659,91 @@ public final class SheetSearch {
                 }
             }
             local.add(q);
+            int[] sheets = {d, t};
+            Separator sep = over(local, sheets);
             int m = local.size();
-            SearchShape[] ls = new SearchShape[m];
-            for (int k = 0; k < m; k++) {
-                ls[k] = shapes[local.get(k)];
-            }
-            Separator sep = new Separator(ls, new double[][] {boxes[d].clone(), boxes[t].clone()}, measure, angles,
-                    rnd, precision);
-            for (int k = 0; k < m; k++) {
+            double[] at = pose[q];
+            sep.place(m - 1, 0, at[1], at[2], at[3]);
+            for (int k = 0; k < m - 1; k++) {
                 int i = local.get(k);
-                double[] p = pose[i];
-                boolean onD = i == q || (int) p[0] == d;
-                sep.place(k, onD ? 0 : 1, p[1], p[2], p[3]);
-                sep.fixed[k] = partFixed[i];
-                sep.settled[k] = i != q && p[4] != 0;
-                sep.home[k] = i == q ? 0 : !onD ? 1 : shapes[i].area >= shapes[q].area ? 0 : -1;
+                sep.home[k] = (int) pose[i][0] == t ? 1 : shapes[i].area >= shapes[q].area ? 0 : -1;
             }
+            sep.home[m - 1] = 0;
+            sep.settled[m - 1] = false;
             sep.reinsert(m - 1);
-            long limit = Math.min(most, budget.moveLimit() - moves);
-            boolean ok = sep.separate(new Separator.Budget(budget.deadline(), limit));
-            moves += sep.moves();
-            if (!ok) {
+            if (!separate(sep, most)) {
                 return false;
             }
             double came = 0;
             double largest = 0;
             for (int k = 0; k < m - 1; k++) {
                 if ((int) pose[local.get(k)][0] == d && sep.bin[k] == 1) {
-                    came += ls[k].area;
-                    largest = Math.max(largest, ls[k].area);
+                    came += shapes[local.get(k)].area;
+                    largest = Math.max(largest, shapes[local.get(k)].area);
                 }
             }
             if (!(came < shapes[q].area || largest <= shapes[q].area * SMALLER_SHARE)) {
                 return false;
             }
+            takePoses(sep, local, sheets);
+            return true;
+        }
+
+        /** The parts on sheet b, by index. */
+        private List<Integer> partsOn(int b) {
+            List<Integer> out = new ArrayList<>();
+            for (int i = 0; i < pose.length; i++) {
+                if ((int) pose[i][0] == b) {
+                    out.add(i);
+                }
+            }
+            return out;
+        }
+
+        /**
+         * A separator over the parts {@code local} (by index) on {@code sheets} (its bin k is sheet sheets[k]): each
+         * part where it is (a part on none of them in bin 0), fixed and settled as it is.
+         */
+        private Separator over(List<Integer> local, int[] sheets) {
+            int m = local.size();
+            SearchShape[] ls = new SearchShape[m];
             for (int k = 0; k < m; k++) {
+                ls[k] = shapes[local.get(k)];
+            }
+            double[][] bx = new double[sheets.length][];
+            for (int k = 0; k < sheets.length; k++) {
+                bx[k] = boxes[sheets[k]].clone();
+            }
+            Separator sep = new Separator(ls, bx, measure, angles, rnd, precision);
+            for (int k = 0; k < m; k++) {
+                int i = local.get(k);
+                double[] p = pose[i];
+                int b = 0;
+                for (int j = 0; j < sheets.length; j++) {
+                    b = sheets[j] == (int) p[0] ? j : b;
+                }
+                sep.place(k, b, p[1], p[2], p[3]);
+                sep.fixed[k] = partFixed[i];
+                sep.settled[k] = p[4] != 0;
+            }
+            return sep;
+        }
+
+        /** Separates within {@code most} piece moves (and the worker's budget), counting them; true on success. */
+        private boolean separate(Separator sep, long most) {
+            long limit = Math.min(most, budget.moveLimit() - moves);
+            boolean ok = sep.separate(new Separator.Budget(budget.deadline(), limit));
+            moves += sep.moves();
+            return ok;
+        }
+
+        /** The separator's poses as the parts' poses (its bin k is sheet sheets[k]). */
+        private void takePoses(Separator sep, List<Integer> local, int[] sheets) {
+            for (int k = 0; k < local.size(); k++) {
                 PlacedShape at = sep.at[k];
-                pose[local.get(k)] = new double[] {sep.bin[k] == 0 ? d : t, at.x, at.y, at.angle, sep.settled[k] ? 1 : 0};
+                pose[local.get(k)] = new double[] {sheets[sep.bin[k]], at.x, at.y, at.angle, sep.settled[k] ? 1 : 0};
             }
             changed = true;
-            return true;
         }
 
         /** How far the search shapes on the last open sheet reach along x, less the half gap they carry, plus the margin. */
