@@ -58,13 +58,14 @@ import dev.sheetwright.nest.place.Nester;
  *
  * <p>With an iteration count, {@link StripSearch#FIXED_WORKERS} logical workers each make an equal share of the
  * piece moves, whatever the thread count, so the result depends only on the input, the seed and the count; a timed
- * run has one worker per thread. The result with the fewest sheets (then lowest cost, ties to the lowest worker)
- * that passes {@link NestChecker} is returned, else the given nest.
+ * run has one worker per thread. The best layout by {@link NestRanking} that passes {@link NestChecker} is returned
+ * (ties keep the given nest, then the lowest worker).
  */
 public final class SheetSearch {
     /**
-     * Most copies a request may have for the sheet search: the separator keeps two weights per pair of parts per
-     * worker (memory quadratic in the parts), and on larger jobs the first engine makes better use of the time.
+     * Most copies a request may have for the sheet search: each insertion scans every part's pose, and the
+     * separation over a sheet keeps two weights per pair of its parts, so sheets of many small parts grow costly; on
+     * larger jobs the first engine makes better use of the time (kept from the earlier search, not measured again).
      */
     public static final int MAX_COPIES = 1500;
     /** Most open sheets a part is offered to, in one try to empty a sheet. */
