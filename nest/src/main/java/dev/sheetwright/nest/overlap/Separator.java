@@ -106,7 +106,6 @@ final class Separator {
         return moves;
     }
 
-
     void place(int i, int b, double x, double y, double angle) {
         bin[i] = b;
         at[i].set(shapes[i], x, y, angle);
@@ -137,11 +136,11 @@ final class Separator {
             if (bin[i] != b) {
                 continue;
             }
-            boolean moves = at[i].x > split;
-            if (moves) {
+            boolean slides = at[i].x > split;
+            if (slides) {
                 place(i, b, at[i].x - delta, at[i].y, at[i].angle);
             }
-            if (moves || at[i].maxX > end) {
+            if (slides || at[i].maxX > end) {
                 settled[i] = false;
             }
         }
@@ -150,9 +149,9 @@ final class Separator {
     /** Recomputes every overlap (after pieces were placed or bins changed). */
     void refresh() {
         for (int i = 0; i < n; i++) {
-            out[i] = asGiven(i) ? 0 : outsideOf(at[i], bin[i]) * size[i] * size[i];
+            out[i] = asGiven(i) ? 0 : outAmount(i, at[i], bin[i]);
             for (int j = i + 1; j < n; j++) {
-                double o = counts(i, j) ? measure.overlap(at[i], at[j]) * size[i] * size[j] : 0;
+                double o = counts(i, j) ? pairAmount(i, at[i], j) : 0;
                 pair[i][j] = o;
                 pair[j][i] = o;
             }
@@ -174,6 +173,16 @@ final class Separator {
             java.util.Arrays.fill(weight[i], 1);
         }
         java.util.Arrays.fill(outWeight, 1);
+    }
+
+    /** How much piece i placed as s sticking out of bin b counts (unweighted): see {@link #size}. */
+    private double outAmount(int i, PlacedShape s, int b) {
+        return outsideOf(s, b) * size[i] * size[i];
+    }
+
+    /** How much the overlap of piece i placed as s with piece j counts (unweighted): see {@link #size}. */
+    private double pairAmount(int i, PlacedShape s, int j) {
+        return measure.overlap(s, at[j]) * size[i] * size[j];
     }
 
     /** How far s sticks out of bin b; within the precision (what the checker forgives) it is inside. */
@@ -226,7 +235,7 @@ final class Separator {
             if (j == i || bin[j] != b || (forgiven && asGiven(j))) {
                 continue;
             }
-            double o = measure.overlap(s, at[j]) * size[i] * size[j];
+            double o = pairAmount(i, s, j);
             if (o > 0) {
                 c += weight[i][j] * o;
                 if (c > limit) {
@@ -454,12 +463,12 @@ final class Separator {
 
     /** Recomputes the overlaps of piece i after it moved. */
     void update(int i) {
-        out[i] = asGiven(i) ? 0 : outsideOf(at[i], bin[i]) * size[i] * size[i];
+        out[i] = asGiven(i) ? 0 : outAmount(i, at[i], bin[i]);
         for (int j = 0; j < n; j++) {
             if (j == i) {
                 continue;
             }
-            double o = counts(i, j) ? measure.overlap(at[i], at[j]) * size[i] * size[j] : 0;
+            double o = counts(i, j) ? pairAmount(i, at[i], j) : 0;
             pair[i][j] = o;
             pair[j][i] = o;
         }
