@@ -36,13 +36,14 @@ public final class NestRanking {
         return NestPrecision.compareTotals(lastLength(a), lastLength(b));
     }
 
-    /** Total cost of the stock a nest uses (a coil by the length cut off). */
+    /** Total cost of the stock a nest uses. */
     public static double cost(NestResult r) {
-        double c = 0;
-        for (SheetLayout l : r.sheets()) {
-            c += l.stock().match(Sheet::cost, Remnant::cost, coil -> coil.costPerLength() * l.usedLength());
-        }
-        return c;
+        return r.sheets().stream().mapToDouble(NestRanking::cost).sum();
+    }
+
+    /** Cost of the stock a layout uses: a sheet's or remnant's price, a coil's by the length cut off. */
+    public static double cost(SheetLayout l) {
+        return l.stock().match(Sheet::cost, Remnant::cost, coil -> coil.costPerLength() * l.usedLength());
     }
 
     private static double area(NestResult r) {

@@ -103,8 +103,6 @@ public final class SheetSearch {
     private final double precision;
     private final OverlapMeasure measure;
     private final AngleSet angles;
-    /** The least width any part's search shape can take (a bin narrower than that holds no part). */
-    private final double smallestExtent;
 
     private SheetSearch(NestRequest request, NestResult start) {
         this.request = request;
@@ -172,11 +170,6 @@ public final class SheetSearch {
         }
         double meanReach = n > 0 ? reach / n : 1;
         this.measure = OverlapMeasure.forPieces(meanReach, precision);
-        double least = Double.POSITIVE_INFINITY;
-        for (SearchShape sh : shapes) {
-            least = Math.min(least, 2 * sh.poleR[0]);
-        }
-        this.smallestExtent = n > 0 ? least : 0;
     }
 
     /**
@@ -218,22 +211,17 @@ public final class SheetSearch {
         NestResult start = Nester.nest(request, options.share(FIRST_LAYOUT_SHARE));
         if (options.iterations().isEmpty() && !roomToEmpty(request, start)) {
             // every sheet is needed by area alone: the rest of the time goes to another run of the first engine
-            long left = Math.max(0, deadline - System.nanoTime());
-            NestResult again = Nester.nest(request, new NestOptions(Duration.ofNanos(left),
-                    OptionalLong.empty(), LogicalWorkers.seedOf(options.seed(), 0), options.threads(),
-                    ProgressListener.NONE));
+            NestResult again = Nester.nest(request, again(options, deadline, options.threads()));
             return NestRanking.BEST_FIRST.compare(again, start) < 0 ? again : start;
         }
         if (options.iterations().isPresent() || options.threads() < 2) {
             return eliminateOrFail(request, start, options, deadline);
         }
-        // one worker searches sheets (a deep search: one worker with a core to itself goes further than two
-        // sharing), another thread runs the first engine again, and the better nest wins
+        // all threads but one search sheets, the last runs the first engine again (a second chance at the first
+        // layout's tie-breaks when no sheet empties), and the better nest wins
         NestOptions searchOptions = new NestOptions(options.timeLimit(), options.iterations(), options.seed(),
                 options.threads() - 1, options.listener());
-        long left = Math.max(0, deadline - System.nanoTime());
-        NestOptions againOptions = new NestOptions(Duration.ofNanos(left), OptionalLong.empty(),
-                LogicalWorkers.seedOf(options.seed(), 0), 1, ProgressListener.NONE);
+        NestOptions againOptions = again(options, deadline, 1);
         ExecutorService ex = Executors.newSingleThreadExecutor(r -> {
             Thread th = new Thread(r, "first-layout-again");
             th.setDaemon(true);
@@ -254,6 +242,16 @@ public final class SheetSearch {
         } finally {
             ex.shutdownNow();
         }
+    }
+
+    /**
+     * Options for another timed run of the first engine until {@code deadline} on {@code threads}, from another seed
+     * than {@code options}' and telling no progress (its early layouts are worse than the one already told).
+     */
+    private static NestOptions again(NestOptions options, long deadline, int threads) {
+        long left = Math.max(0, deadline - System.nanoTime());
+        return new NestOptions(Duration.ofNanos(left), OptionalLong.empty(), LogicalWorkers.seedOf(options.seed(), 0),
+                threads, ProgressListener.NONE);
     }
 
     /**
@@ -416,7 +414,7 @@ public final class SheetSearch {
             }
             double cost = costOf(open);
             for (SheetLayout l : start.sheets()) {
-                cost += l.stock().match(sh -> 0.0, r -> r.cost(), c -> c.costPerLength() * l.usedLength());
+                cost += l.stock() instanceof Sheet ? 0 : NestRanking.cost(l);
             }
             options.listener().improved(moves, sheets + others, cost, lastLength,
                     stockArea > 0 ? Math.min(1, partArea / stockArea) : 0);
@@ -425,7 +423,8 @@ public final class SheetSearch {
 
     /**
      * One logical worker with its own random source. It keeps every part's pose (bin, x, y, angle, 1 while settled)
-     * and which sheets are open, and changes them only by an insertion that separated.
+     * and which sheets are open, and changes them only by a separation that succeeded (an insertion, a trade, or the
+     * last sheet's compaction).
      */
     private final class Worker {
         private final SplittableRandom rnd;
@@ -449,7 +448,7 @@ public final class SheetSearch {
             return budget.spent(moves);
         }
 
-        /** The fewest-sheet layout found, or null if no sheet could be emptied. */
+        /** The layout the worker ends with, or null if no part moved. */
         Found call() {
             int n = parts.size();
             pose = new double[n][];
@@ -498,7 +497,7 @@ public final class SheetSearch {
         /**
          * Compacts the last open sheet toward its near end, for the largest offcut there: its bin is cut shorter (the
          * parts right of a random line move left by the cut) and separated on that sheet, {@link #COMPACT_FIRST_CUT}
-         * of the used length at first, halving after two failures, until {@link #COMPACT_SMALLEST_CUT} or the budget.
+         * of the used length at first, halving after {@link StripSearch#FAILS_BEFORE_SMALLER_CUT} failures, until {@link #COMPACT_SMALLEST_CUT} or the budget.
          * A sheet with a part holding others in its holes is left as it is.
          */
         private void compactLast() {
@@ -512,8 +511,7 @@ public final class SheetSearch {
                 return;
             }
             List<Integer> local = partsOn(last);
-            int m = local.size();
-            if (m == 0 || local.stream().anyMatch(i -> partFixed[i])) {
+            if (local.isEmpty() || local.stream().anyMatch(i -> partFixed[i])) {
                 return;
             }
             Separator sep = over(local, new int[] {last});
@@ -532,18 +530,15 @@ public final class SheetSearch {
                     best = sep.snapshot();
                     bestLength = sep.reach(0);
                     fails = 0;
-                } else if (++fails >= 2) {
+                } else if (++fails >= StripSearch.FAILS_BEFORE_SMALLER_CUT) {
                     cut /= 2;
                     fails = 0;
                 }
             }
             moves += sep.moves();
             if (bestLength < startLength) {
-                for (int k = 0; k < m; k++) {
-                    double[] b = best[k];
-                    pose[local.get(k)] = new double[] {last, b[1], b[2], b[3], b[4]};
-                }
-                changed = true;
+                sep.restore(best);
+                takePoses(sep, local, new int[] {last});
             }
         }
 
