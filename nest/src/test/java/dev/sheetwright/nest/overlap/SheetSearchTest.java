@@ -35,6 +35,13 @@ class SheetSearchTest {
 
     private static final Sheet SHEET = Sheet.unlimited("12x10", 12, 10, 20);
 
+    /** {@code pieces} on 12 x 10 sheets, gap 0.25, margin 0.5, quarter turns. */
+    private static NestRequest onSheets(List<NestPiece> pieces) {
+        List<Stock> stock = List.of(SHEET);
+        return new NestRequest(pieces, stock, new NestRules(0.25, 0.5, RotationRule.quarter(), false, 0.01),
+                NestPrecision.ofScale(NestPrecision.scaleOf(pieces, stock)));
+    }
+
     /** A feasible but wasteful first layout: the eight parts spread over four sheets, two on each. */
     private static NestResult wasteful(List<Stock> extraFirst) {
         List<SheetLayout> layouts = new ArrayList<>();
@@ -115,9 +122,7 @@ class SheetSearchTest {
                 NestPiece.of("PL", "plate", 4, Shapes.rect(0, 0, 4, 3)),
                 NestPiece.of("FR", "frame", 1, Shapes.frame(6, 4)),
                 NestPiece.of("PG", "plug", 1, Shapes.rect(0, 0, 2, 2)));
-        List<Stock> stock = List.of(SHEET);
-        NestRequest req = new NestRequest(pieces, stock, new NestRules(0.25, 0.5, RotationRule.quarter(), false, 0.01),
-                NestPrecision.ofScale(NestPrecision.scaleOf(pieces, stock)));
+        NestRequest req = onSheets(pieces);
         Placement frame = new Placement("FR", "frame", 0, 0.5, 0.5, 0, false);
         Placement plug = new Placement("PG", "plug", 0, 2.5, 2.5, 0, false);
         List<SheetLayout> layouts = new ArrayList<>();
@@ -150,9 +155,7 @@ class SheetSearchTest {
         List<NestPiece> pieces = List.of(
                 NestPiece.of("PL", "plate", 2, Shapes.rect(0, 0, 4, 8)),
                 NestPiece.of("SL", "slat", 1, Shapes.rect(0, 0, 2.4, 8)));
-        List<Stock> stock = List.of(SHEET);
-        NestRequest req = new NestRequest(pieces, stock, new NestRules(0.25, 0.5, RotationRule.quarter(), false, 0.01),
-                NestPrecision.ofScale(NestPrecision.scaleOf(pieces, stock)));
+        NestRequest req = onSheets(pieces);
         NestResult start = new NestResult(List.of(
                 new SheetLayout(SHEET, 0, 10.5, List.of(new Placement("PL", "plate", 0, 0.5, 0.5, 0, false),
                         new Placement("PL", "plate", 1, 6.5, 0.5, 0, false)), null, 0.53),
@@ -191,9 +194,7 @@ class SheetSearchTest {
                 NestPiece.of("PL", "plate", 1, Shapes.rect(0, 0, 7, 8)),
                 NestPiece.of("SQ", "square", 1, Shapes.rect(0, 0, 3, 3)),
                 NestPiece.of("SL", "slat", 1, Shapes.rect(0, 0, 3.4, 8)));
-        List<Stock> stock = List.of(SHEET);
-        NestRequest req = new NestRequest(pieces, stock, new NestRules(0.25, 0.5, RotationRule.quarter(), false, 0.01),
-                NestPrecision.ofScale(NestPrecision.scaleOf(pieces, stock)));
+        NestRequest req = onSheets(pieces);
         NestResult start = new NestResult(List.of(
                 new SheetLayout(SHEET, 0, 11.5, List.of(new Placement("PL", "plate", 0, 0.5, 0.5, 0, false),
                         new Placement("SQ", "square", 0, 8, 0.5, 0, false)), null, 0.54),
