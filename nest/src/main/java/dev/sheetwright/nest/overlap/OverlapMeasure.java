@@ -74,6 +74,10 @@ final class OverlapMeasure {
     static double cornerDepth(PlacedShape a, PlacedShape b) {
         double deepest = 0;
         int nb = b.n();
+        // the edge of b nearest the last corner tested: the next corner inside b is most often near it too, so the
+        // scan starts there and stops early once an edge is nearer than the deepest corner so far (the minimum, and
+        // so the result, does not depend on the order)
+        int near = 0;
         for (int i = 0; i < a.n(); i++) {
             double x = a.wx[i];
             double y = a.wy[i];
@@ -84,8 +88,25 @@ final class OverlapMeasure {
             }
             double d2 = room * room;
             double floor2 = deepest * deepest;
-            for (int j = 0, pj = nb - 1; j < nb && d2 > floor2; pj = j++) {
-                d2 = Math.min(d2, segmentDistance2(x, y, b.wx[pj], b.wy[pj], b.wx[j], b.wy[j]));
+            int start = near;
+            for (int k = 0; k < nb && d2 > floor2; k++) {
+                int j = start + k < nb ? start + k : start + k - nb;
+                int pj = j == 0 ? nb - 1 : j - 1;
+                double x0 = b.wx[pj];
+                double y0 = b.wy[pj];
+                double x1 = b.wx[j];
+                double y1 = b.wy[j];
+                // an edge whose box is no nearer than the nearest edge so far cannot be nearer
+                double gx = Math.max(0, Math.max(Math.min(x0, x1) - x, x - Math.max(x0, x1)));
+                double gy = Math.max(0, Math.max(Math.min(y0, y1) - y, y - Math.max(y0, y1)));
+                if (gx * gx + gy * gy >= d2) {
+                    continue;
+                }
+                double e2 = segmentDistance2(x, y, x0, y0, x1, y1);
+                if (e2 < d2) {
+                    d2 = e2;
+                    near = j;
+                }
             }
             deepest = Math.max(deepest, Math.sqrt(d2));
         }
@@ -222,22 +243,7 @@ final class OverlapMeasure {
 
     /** Even-odd point in polygon; a point on the boundary may go either way (the callers test deep points). */
     static boolean inside(double x, double y, PlacedShape s) {
-        if (x < s.minX || x > s.maxX || y < s.minY || y > s.maxY) {
-            return false;
-        }
-        boolean in = false;
-        int n = s.n();
-        for (int i = 0, j = n - 1; i < n; j = i++) {
-            double yi = s.wy[i];
-            double yj = s.wy[j];
-            if ((yi > y) != (yj > y)) {
-                double xc = s.wx[j] + (y - yj) / (yi - yj) * (s.wx[i] - s.wx[j]);
-                if (x < xc) {
-                    in = !in;
-                }
-            }
-        }
-        return in;
+        return s.contains(x, y);
     }
 
     /** How far the shape sticks out of the box [x0, x1] x [y0, y1], summed over the four sides (0 when inside). */

@@ -17,6 +17,9 @@ final class PlacedShape {
     double x;
     double y;
     double angle;
+    /** Cosine and sine of the angle. */
+    double cos;
+    double sin;
 
     void set(SearchShape s, double x, double y, double angleDeg) {
         this.shape = s;
@@ -35,6 +38,8 @@ final class PlacedShape {
         }
         double c = Turn.cos(angleDeg);
         double sn = Turn.sin(angleDeg);
+        this.cos = c;
+        this.sin = sn;
         double x0 = Double.POSITIVE_INFINITY;
         double y0 = Double.POSITIVE_INFINITY;
         double x1 = Double.NEGATIVE_INFINITY;
@@ -57,6 +62,16 @@ final class PlacedShape {
             px[i] = c * s.poleX[i] - sn * s.poleY[i] + x;
             py[i] = sn * s.poleX[i] + c * s.poleY[i] + y;
         }
+    }
+
+    /** Whether the world point (x, y) lies inside the placed outline (even-odd; the boundary may go either way). */
+    boolean contains(double px, double py) {
+        if (px < minX || px > maxX || py < minY || py > maxY) {
+            return false;
+        }
+        double dx = px - x;
+        double dy = py - y;
+        return shape.containsLocal(cos * dx + sin * dy, cos * dy - sin * dx);
     }
 
     int n() {

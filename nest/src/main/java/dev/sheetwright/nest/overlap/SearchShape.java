@@ -1,6 +1,7 @@
 package dev.sheetwright.nest.overlap;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 import org.locationtech.jts.algorithm.construct.MaximumInscribedCircle;
@@ -65,6 +66,10 @@ public final class SearchShape {
     final double[] edgeLength;
     /** Distance from the reference point to the farthest vertex. */
     final double reach;
+    /** The distinct vertex heights, ascending: the bounds of the bands {@link #containsLocal} looks up. */
+    private final double[] slabY;
+    /** For each band between two consecutive heights, the edges (by end vertex) that cross it from bottom to top. */
+    private final int[][] slabEdges;
 
     private SearchShape(double[] xs, double[] ys, double[] poleX, double[] poleY, double[] poleR, double refX, double refY,
             double area) {
@@ -85,6 +90,52 @@ public final class SearchShape {
         for (int i = 0, j = xs.length - 1; i < xs.length; j = i++) {
             edgeLength[i] = Math.hypot(xs[i] - xs[j], ys[i] - ys[j]);
         }
+        this.slabY = Arrays.stream(ys).sorted().distinct().toArray();
+        int slabs = Math.max(0, slabY.length - 1);
+        this.slabEdges = new int[slabs][];
+        int n = xs.length;
+        for (int k = 0; k < slabs; k++) {
+            int[] in = new int[n];
+            int c = 0;
+            for (int i = 0, j = n - 1; i < n; j = i++) {
+                if (Math.min(ys[i], ys[j]) <= slabY[k] && Math.max(ys[i], ys[j]) >= slabY[k + 1]) {
+                    in[c++] = i;
+                }
+            }
+            slabEdges[k] = Arrays.copyOf(in, c);
+        }
+    }
+
+    /**
+     * Whether the local point (x, y) lies inside the outline (even-odd; a point on the boundary may go either way):
+     * the edges that cross the horizontal band of the point's y are looked up (the bands lie between consecutive
+     * vertex heights), so the test takes a few edges instead of all of them.
+     */
+    boolean containsLocal(double x, double y) {
+        int last = slabY.length - 1;
+        if (last < 1 || y < slabY[0] || y >= slabY[last]) {
+            return false;
+        }
+        int lo = 0;
+        int hi = last - 1;
+        while (lo < hi) { // the band k with slabY[k] <= y < slabY[k + 1]
+            int mid = (lo + hi + 1) >>> 1;
+            if (slabY[mid] <= y) {
+                lo = mid;
+            } else {
+                hi = mid - 1;
+            }
+        }
+        boolean in = false;
+        int n = xs.length;
+        for (int i : slabEdges[lo]) {
+            int j = i == 0 ? n - 1 : i - 1;
+            double xc = xs[j] + (y - ys[j]) / (ys[i] - ys[j]) * (xs[i] - xs[j]);
+            if (x < xc) {
+                in = !in;
+            }
+        }
+        return in;
     }
 
     /**

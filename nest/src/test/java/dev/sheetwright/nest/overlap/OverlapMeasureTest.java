@@ -137,6 +137,33 @@ class OverlapMeasureTest {
         assertTrue(hits > 100, "the random pairs must include collisions, got " + hits);
     }
 
+    @Test
+    void cornerDepthIsTheDeepestCornerInsideTheOtherShapeAsJtsMeasuresIt() {
+        Polygon ell = Shapes.wkt("POLYGON ((0 0, 8 0, 8 2, 2 2, 2 6, 0 6, 0 0))");
+        Polygon notched = Shapes.wkt("POLYGON ((0 0, 7 0, 7 4, 4.5 4, 4.5 1.5, 2.5 1.5, 2.5 4, 0 4, 0 0))");
+        SearchShape a = SearchShape.of(ell, 0, 1e-9);
+        SearchShape b = SearchShape.of(notched, 0, 1e-9);
+        SplittableRandom rnd = new SplittableRandom(9);
+        int deep = 0;
+        for (int k = 0; k < 2000; k++) {
+            double aa = rnd.nextDouble() * 360;
+            double ba = rnd.nextDouble() * 360;
+            PlacedShape pa = at(a, rnd.nextDouble() * 8, rnd.nextDouble() * 8, aa);
+            PlacedShape pb = at(b, rnd.nextDouble() * 8, rnd.nextDouble() * 8, ba);
+            Polygon jb = world(b, pb.x, pb.y, ba);
+            double expected = 0;
+            for (int i = 0; i < pa.n(); i++) {
+                org.locationtech.jts.geom.Point v = Shapes.GF.createPoint(new org.locationtech.jts.geom.Coordinate(pa.wx[i], pa.wy[i]));
+                if (jb.contains(v)) {
+                    expected = Math.max(expected, jb.getExteriorRing().distance(v));
+                }
+            }
+            assertEquals(expected, OverlapMeasure.cornerDepth(pa, pb), 1e-9, "pair " + k);
+            deep += expected > 0.5 ? 1 : 0;
+        }
+        assertTrue(deep > 50, "the random pairs must include corners deep inside, got " + deep);
+    }
+
     private static Polygon world(SearchShape s, double x, double y, double angle) {
         AffineTransformation t = new AffineTransformation().rotate(Math.toRadians(angle)).translate(x, y);
         return (Polygon) t.transform(s.localPolygon());
