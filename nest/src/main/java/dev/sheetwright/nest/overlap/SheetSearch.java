@@ -7,10 +7,12 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.OptionalLong;
 import java.util.SplittableRandom;
+import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.function.Predicate;
 
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.GeometryFactory;
@@ -37,8 +39,9 @@ import dev.sheetwright.nest.place.Nester;
  * over that sheet's parts alone (all of them may move, within the sheet) removes the overlap. Each part first gets a
  * quick try ({@link #QUICK_MOVES} piece moves: a part that fits a hole, or nearly) on every sheet with room for it by
  * area, the emptiest first; the first part that stays then gets a thorough try ({@link #ATTEMPT_MOVES}) on
- * {@link #DESTINATIONS} of them, before smaller parts take the room. When every part has left, the sheet closes and
- * the next least filled one is emptied. A part that stays keeps the sheet open; the parts that moved stay moved (the
+ * {@link #DESTINATIONS} of them, before smaller parts take the room. Tries go {@link #LANES} at a time, side by side
+ * on their own threads in a timed run, and the first in order that succeeds is kept. When every part has left, the
+ * sheet closes and the next least filled one is emptied. A part that stays keeps the sheet open; the parts that moved stay moved (the
  * layout is feasible after every insertion, and the sheet only emptier), and the next round tries again with the
  * thorough tries on sheets chosen at random and, from the second round on, trades: the part goes onto a sheet whose
  * smaller parts may leave for the sheet being emptied, if they bring less area than it takes away or are much
@@ -57,8 +60,9 @@ import dev.sheetwright.nest.place.Nester;
  * sheet less the margin, widened by half the gap, since the search shapes carry half the gap.
  *
  * <p>With an iteration count, {@link StripSearch#FIXED_WORKERS} logical workers each make an equal share of the
- * piece moves, whatever the thread count, so the result depends only on the input, the seed and the count; a timed
- * run has one worker per thread. The best layout by {@link NestRanking} that passes {@link NestChecker} is returned
+ * piece moves, whatever the thread count, so the result depends only on the input, the seed and the count (each
+ * try draws from its own random source, split from its worker's in order); a timed run has one worker per
+ * {@link #LANES} threads. The best layout by {@link NestRanking} that passes {@link NestChecker} is returned
  * (ties keep the given nest, then the lowest worker).
  */
 public final class SheetSearch {
@@ -80,6 +84,12 @@ public final class SheetSearch {
      * of the part that left (parts that much smaller find room elsewhere more easily).
      */
     static final double SMALLER_SHARE = 0.5;
+    /**
+     * Tries a worker runs side by side (a part offered to this many sheets at once): so many threads per worker in a
+     * timed run, and the same batches taken in turn in a run of fixed steps, so its nest does not depend on the thread
+     * count.
+     */
+    static final int LANES = 2;
     /** Most piece moves a quick insertion may take to separate. */
     static final long QUICK_MOVES = 100;
     /** Most piece moves one insertion may take to separate. */
@@ -197,9 +207,9 @@ public final class SheetSearch {
      * to empty sheets in the rest (with an iteration count: as many piece moves). When the first layout has no more
      * sheets than the area of its parts needs ({@link #roomToEmpty}), a timed run gives the rest to another run of
      * the first engine from another seed instead, and the better nest by {@link NestRanking} wins. Else a timed run
-     * on two threads or more searches sheets on all but one, and the last runs the first engine again meanwhile (the
-     * better nest wins). When the sheet search does not apply (no sheets, or more than {@link #MAX_COPIES} copies)
-     * the first engine gets all the time.
+     * searches sheets on its threads in groups of {@link #LANES}; a thread left over runs the first engine again
+     * meanwhile (the better nest wins). When the sheet search does not apply (no sheets, or more than
+     * {@link #MAX_COPIES} copies) the first engine gets all the time.
      *
      * @throws NestFailure if the sheet search fails (a bug)
      */
@@ -209,18 +219,22 @@ public final class SheetSearch {
         }
         long deadline = System.nanoTime() + Math.min(options.timeLimit().toNanos(), Long.MAX_VALUE / 4);
         NestResult start = Nester.nest(request, options.share(FIRST_LAYOUT_SHARE));
-        if (options.iterations().isEmpty() && !roomToEmpty(request, start)) {
+        if (options.iterations().isPresent()) {
+            return eliminateOrFail(request, start, options, deadline);
+        }
+        if (!roomToEmpty(request, start)) {
             // every sheet is needed by area alone: the rest of the time goes to another run of the first engine
             NestResult again = Nester.nest(request, again(options, deadline, options.threads()));
             return NestRanking.BEST_FIRST.compare(again, start) < 0 ? again : start;
         }
-        if (options.iterations().isPresent() || options.threads() < 2) {
+        int spare = options.threads() % LANES;
+        if (options.threads() < LANES || spare == 0) {
             return eliminateOrFail(request, start, options, deadline);
         }
-        // all threads but one search sheets, the last runs the first engine again (a second chance at the first
-        // layout's tie-breaks when no sheet empties), and the better nest wins
+        // the threads that pair up search sheets, the one left over runs the first engine again (a second chance at
+        // the first layout's tie-breaks when no sheet empties), and the better nest wins
         NestOptions searchOptions = new NestOptions(options.timeLimit(), options.iterations(), options.seed(),
-                options.threads() - 1, options.listener());
+                options.threads() - spare, options.listener());
         NestOptions againOptions = again(options, deadline, 1);
         ExecutorService ex = Executors.newSingleThreadExecutor(r -> {
             Thread th = new Thread(r, "first-layout-again");
@@ -309,11 +323,26 @@ public final class SheetSearch {
 
     private NestResult run(NestOptions options, long deadline) {
         boolean counted = options.iterations().isPresent();
-        int workers = counted ? StripSearch.FIXED_WORKERS : options.threads();
+        // a timed run: one worker per LANES threads, each trying sheets side by side on its own threads
+        int workers = counted ? StripSearch.FIXED_WORKERS : Math.max(1, options.threads() / LANES);
+        boolean sideBySide = !counted && options.threads() >= LANES;
         long perWorker = counted ? Math.max(1, options.iterations().getAsLong() / workers) : Long.MAX_VALUE;
         Progress progress = new Progress(options, binLayouts.size());
         List<Found> results = LogicalWorkers.run("sheet-search", workers, options.threads(), options.seed(),
-                seed -> () -> new Worker(seed, new Separator.Budget(deadline, perWorker), progress).call());
+                seed -> () -> {
+                    ExecutorService pool = sideBySide ? Executors.newFixedThreadPool(LANES, r -> {
+                        Thread th = new Thread(r, "sheet-search-lane");
+                        th.setDaemon(true);
+                        return th;
+                    }) : null;
+                    try {
+                        return new Worker(seed, new Separator.Budget(deadline, perWorker), progress, pool).call();
+                    } finally {
+                        if (pool != null) {
+                            pool.shutdownNow();
+                        }
+                    }
+                });
         // the best by the shop's ranking that passes the checker; ties keep the start, then the lowest worker
         NestResult best = start;
         for (Found f : results) {
@@ -330,6 +359,31 @@ public final class SheetSearch {
 
     /** The poses of a worker's layout and its open bins. */
     record Found(double[][] poses, boolean[] open) {
+    }
+
+    /** A try at moving parts: builds the separation to run from its own random source. */
+    @FunctionalInterface
+    private interface Try {
+        Attempt start(SplittableRandom r);
+    }
+
+    /**
+     * A separation being tried over some parts ({@code local}, by index) on some sheets, with an optional further test
+     * of the separated layout ({@code keep}, null for none); {@code ok} once it has run.
+     */
+    private static final class Attempt {
+        final Separator sep;
+        final List<Integer> local;
+        final int[] sheets;
+        final Predicate<Separator> keep;
+        boolean ok;
+
+        Attempt(Separator sep, List<Integer> local, int[] sheets, Predicate<Separator> keep) {
+            this.sep = sep;
+            this.local = local;
+            this.sheets = sheets;
+            this.keep = keep;
+        }
     }
 
     private double costOf(boolean[] open) {
@@ -438,10 +492,15 @@ public final class SheetSearch {
         /** Whether any part moved. */
         private boolean changed;
 
-        Worker(long seed, Separator.Budget budget, Progress progress) {
+        /** Tries run side by side ({@link #LANES}), on {@link #pool} when it has one, else in turn. */
+        private final int lanes = LANES;
+        private final ExecutorService pool;
+
+        Worker(long seed, Separator.Budget budget, Progress progress, ExecutorService pool) {
             this.rnd = new SplittableRandom(seed);
             this.budget = budget;
             this.progress = progress;
+            this.pool = pool;
         }
 
         private boolean spent() {
@@ -514,7 +573,7 @@ public final class SheetSearch {
             if (local.isEmpty() || local.stream().anyMatch(i -> partFixed[i])) {
                 return;
             }
-            Separator sep = over(local, new int[] {last});
+            Separator sep = over(local, new int[] {last}, rnd);
             double near = boxes[last][0];
             double startLength = sep.reach(0);
             double bestLength = startLength;
@@ -573,10 +632,11 @@ public final class SheetSearch {
                     return false;
                 }
                 List<Integer> dests = destinations(t, q);
-                boolean placed = false;
-                for (int k = 0; k < dests.size() && !placed && !spent(); k++) {
-                    placed = insert(q, dests.get(k), QUICK_MOVES);
+                List<Try> tries = new ArrayList<>();
+                for (int d : dests) {
+                    tries.add(r -> insert(q, d, r));
                 }
+                boolean placed = first(tries, QUICK_MOVES);
                 if (!placed && all) {
                     // the first part to stay gets the costly tries, before smaller parts take the room
                     if (round > 0) {
@@ -585,11 +645,18 @@ public final class SheetSearch {
                             dests.set(k, dests.set(j, dests.get(k)));
                         }
                     }
-                    for (int k = 0; k < Math.min(DESTINATIONS, dests.size()) && !placed && !spent(); k++) {
-                        placed = insert(q, dests.get(k), ATTEMPT_MOVES);
+                    List<Integer> some = dests.subList(0, Math.min(DESTINATIONS, dests.size()));
+                    tries.clear();
+                    for (int d : some) {
+                        tries.add(r -> insert(q, d, r));
                     }
-                    for (int k = 0; k < Math.min(DESTINATIONS, dests.size()) && !placed && !spent() && round > 0; k++) {
-                        placed = trade(q, t, dests.get(k), ATTEMPT_MOVES);
+                    placed = first(tries, ATTEMPT_MOVES);
+                    if (!placed && round > 0) {
+                        tries.clear();
+                        for (int d : some) {
+                            tries.add(r -> trade(q, t, d, r));
+                        }
+                        placed = first(tries, ATTEMPT_MOVES);
                     }
                 }
                 all &= placed;
@@ -622,22 +689,18 @@ public final class SheetSearch {
         }
 
         /**
-         * Puts part q onto sheet d at the place of least overlap sampled there, and separates the parts of d (all of
-         * them may move, within d only); on success the poses take the separated layout.
+         * Part q put onto sheet d at the place of least overlap sampled there, for a {@link Separator} over the parts
+         * of d (all of them may move, within d only) to remove the overlap.
          */
-        private boolean insert(int q, int d, long most) {
+        private Attempt insert(int q, int d, SplittableRandom r) {
             List<Integer> local = partsOn(d);
             local.add(q);
             int[] sheets = {d};
-            Separator sep = over(local, sheets);
+            Separator sep = over(local, sheets, r);
             int m = local.size();
             sep.settled[m - 1] = false;
             sep.reinsert(m - 1);
-            boolean ok = separate(sep, most);
-            if (ok) {
-                takePoses(sep, local, sheets);
-            }
-            return ok;
+            return new Attempt(sep, local, sheets, null);
         }
 
         /**
@@ -646,7 +709,7 @@ public final class SheetSearch {
          * d). Kept when it separates and what came over to t has less area than q (t ends with less on it), or comes
          * in parts each at most {@link #SMALLER_SHARE} of q, easier to place elsewhere.
          */
-        private boolean trade(int q, int t, int d, long most) {
+        private Attempt trade(int q, int t, int d, SplittableRandom r) {
             List<Integer> local = new ArrayList<>();
             for (int i = 0; i < pose.length; i++) {
                 int b = (int) pose[i][0];
@@ -656,7 +719,7 @@ public final class SheetSearch {
             }
             local.add(q);
             int[] sheets = {d, t};
-            Separator sep = over(local, sheets);
+            Separator sep = over(local, sheets, r);
             int m = local.size();
             double[] at = pose[q];
             sep.place(m - 1, 0, at[1], at[2], at[3]);
@@ -667,22 +730,78 @@ public final class SheetSearch {
             sep.home[m - 1] = 0;
             sep.settled[m - 1] = false;
             sep.reinsert(m - 1);
-            if (!separate(sep, most)) {
-                return false;
-            }
-            double came = 0;
-            double largest = 0;
-            for (int k = 0; k < m - 1; k++) {
-                if ((int) pose[local.get(k)][0] == d && sep.bin[k] == 1) {
-                    came += shapes[local.get(k)].area;
-                    largest = Math.max(largest, shapes[local.get(k)].area);
+            return new Attempt(sep, local, sheets, done -> {
+                double came = 0;
+                double largest = 0;
+                for (int k = 0; k < m - 1; k++) {
+                    if ((int) pose[local.get(k)][0] == d && done.bin[k] == 1) {
+                        came += shapes[local.get(k)].area;
+                        largest = Math.max(largest, shapes[local.get(k)].area);
+                    }
+                }
+                return came < shapes[q].area || largest <= shapes[q].area * SMALLER_SHARE;
+            });
+        }
+
+        /**
+         * Runs {@code tries} in order, up to {@link #lanes} side by side (each from its own random source, split from
+         * the worker's in order, so the outcome does not depend on how many run at once), each separating within
+         * {@code most} piece moves and the worker's budget; the poses take the first in order that succeeds, and the
+         * rest of that batch is dropped. Returns whether one succeeded.
+         */
+        private boolean first(List<Try> tries, long most) {
+            for (int from = 0; from < tries.size() && !spent(); from += lanes) {
+                int to = Math.min(tries.size(), from + lanes);
+                long limit = Math.min(most, budget.moveLimit() - moves);
+                Separator.Budget each = new Separator.Budget(budget.deadline(), limit);
+                List<Callable<Attempt>> batch = new ArrayList<>();
+                for (int k = from; k < to; k++) {
+                    Try tr = tries.get(k);
+                    SplittableRandom r = rnd.split();
+                    batch.add(() -> {
+                        Attempt a = tr.start(r);
+                        a.ok = a.sep.separate(each) && (a.keep == null || a.keep.test(a.sep));
+                        return a;
+                    });
+                }
+                List<Attempt> done = runAll(batch);
+                Attempt won = null;
+                for (Attempt a : done) {
+                    moves += a.sep.moves();
+                    if (won == null && a.ok) {
+                        won = a;
+                    }
+                }
+                if (won != null) {
+                    takePoses(won.sep, won.local, won.sheets);
+                    return true;
                 }
             }
-            if (!(came < shapes[q].area || largest <= shapes[q].area * SMALLER_SHARE)) {
-                return false;
+            return false;
+        }
+
+        /** Runs the batch on the worker's lanes (in turn when it has one), results in order. */
+        private List<Attempt> runAll(List<Callable<Attempt>> batch) {
+            List<Attempt> out = new ArrayList<>();
+            try {
+                if (pool == null || batch.size() < 2) {
+                    for (Callable<Attempt> c : batch) {
+                        out.add(c.call());
+                    }
+                    return out;
+                }
+                for (Future<Attempt> f : pool.invokeAll(batch)) {
+                    out.add(f.get());
+                }
+                return out;
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("the sheet search was interrupted", e);
+            } catch (ExecutionException e) {
+                throw e.getCause() instanceof RuntimeException re ? re : new IllegalStateException(e.getCause());
+            } catch (Exception e) {
+                throw e instanceof RuntimeException re ? re : new IllegalStateException(e);
             }
-            takePoses(sep, local, sheets);
-            return true;
         }
 
         /** The parts on sheet b, by index. */
@@ -697,10 +816,10 @@ public final class SheetSearch {
         }
 
         /**
-         * A separator over the parts {@code local} (by index) on {@code sheets} (its bin k is sheet sheets[k]): each
-         * part where it is (a part on none of them in bin 0), fixed and settled as it is.
+         * A separator over the parts {@code local} (by index) on {@code sheets} (its bin k is sheet sheets[k]) drawing
+         * from {@code r}: each part where it is (a part on none of them in bin 0), fixed and settled as it is.
          */
-        private Separator over(List<Integer> local, int[] sheets) {
+        private Separator over(List<Integer> local, int[] sheets, SplittableRandom r) {
             int m = local.size();
             SearchShape[] ls = new SearchShape[m];
             for (int k = 0; k < m; k++) {
@@ -710,7 +829,7 @@ public final class SheetSearch {
             for (int k = 0; k < sheets.length; k++) {
                 bx[k] = boxes[sheets[k]].clone();
             }
-            Separator sep = new Separator(ls, bx, measure, angles, rnd, precision);
+            Separator sep = new Separator(ls, bx, measure, angles, r, precision);
             for (int k = 0; k < m; k++) {
                 int i = local.get(k);
                 double[] p = pose[i];
@@ -723,14 +842,6 @@ public final class SheetSearch {
                 sep.settled[k] = p[4] != 0;
             }
             return sep;
-        }
-
-        /** Separates within {@code most} piece moves (and the worker's budget), counting them; true on success. */
-        private boolean separate(Separator sep, long most) {
-            long limit = Math.min(most, budget.moveLimit() - moves);
-            boolean ok = sep.separate(new Separator.Budget(budget.deadline(), limit));
-            moves += sep.moves();
-            return ok;
         }
 
         /** The separator's poses as the parts' poses (its bin k is sheet sheets[k]). */

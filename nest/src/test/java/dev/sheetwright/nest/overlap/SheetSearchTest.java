@@ -7,6 +7,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 
 import dev.sheetwright.nest.check.NestChecker;
 import dev.sheetwright.nest.model.NestOptions;
@@ -168,10 +170,12 @@ class SheetSearchTest {
         assertTrue(NestChecker.check(req, r).isEmpty(), "checker: " + NestChecker.check(req, r));
     }
 
-    @Test
-    void aTimedRunOnTwoThreadsPlacesEveryPartAndPassesTheChecker() {
+    /** Two threads: one worker trying sheets two at a time; three: the same and the first engine again on the third. */
+    @ParameterizedTest
+    @ValueSource(ints = {2, 3})
+    void aTimedRunOnSeveralThreadsPlacesEveryPartAndPassesTheChecker(int threads) {
         NestRequest req = request(RotationRule.free(), List.of(SHEET));
-        NestResult r = SheetSearch.nest(req, NestOptions.timed(java.time.Duration.ofMillis(1500), 1, 2));
+        NestResult r = SheetSearch.nest(req, NestOptions.timed(java.time.Duration.ofMillis(1500), 1, threads));
         assertEquals(8, r.placedCount());
         assertTrue(r.unplaced().isEmpty());
         assertTrue(sheetsOf(r) <= 2, "eight small parts fit on two sheets, got " + sheetsOf(r));
