@@ -39,8 +39,8 @@ import dev.sheetwright.nest.place.Nester;
  * over that sheet's parts alone (all of them may move, within the sheet) removes the overlap. Each part first gets a
  * quick try ({@link #QUICK_MOVES} piece moves: a part that fits a hole, or nearly) on every sheet with room for it by
  * area, the emptiest first; the first part that stays then gets a thorough try ({@link #ATTEMPT_MOVES}) on
- * {@link #DESTINATIONS} of them, before smaller parts take the room. Tries go {@link #LANES} at a time, side by side
- * on their own threads in a timed run, and the first in order that succeeds is kept. When every part has left, the
+ * {@link #DESTINATIONS} of them, before smaller parts take the room. In a timed run tries go {@link #LANES} at a
+ * time, side by side on their own threads, and the first in order that succeeds is kept. When every part has left, the
  * sheet closes and the next least filled one is emptied. A part that stays keeps the sheet open; the parts that moved stay moved (the
  * layout is feasible after every insertion, and the sheet only emptier), and the next round tries again with the
  * thorough tries on sheets chosen at random and, from the second round on, trades: the part goes onto a sheet whose
@@ -85,9 +85,9 @@ public final class SheetSearch {
      */
     static final double SMALLER_SHARE = 0.5;
     /**
-     * Tries a worker runs side by side (a part offered to this many sheets at once): so many threads per worker in a
-     * timed run, and the same batches taken in turn in a run of fixed steps, so its nest does not depend on the thread
-     * count.
+     * Tries a worker runs side by side (a part offered to this many sheets at once) on so many threads of its own in a
+     * timed run; a run of fixed steps (or on one thread) takes them in turn and stops at the first that succeeds, so
+     * its nest does not depend on the thread count.
      */
     static final int LANES = 2;
     /** Most piece moves a quick insertion may take to separate. */
@@ -780,13 +780,21 @@ public final class SheetSearch {
             return false;
         }
 
-        /** Runs the batch on the worker's lanes (in turn when it has one), results in order. */
+        /**
+         * Runs the batch on the worker's lanes, results in order; with no lanes (a run of fixed steps, or one thread)
+         * in turn, stopping at the first that succeeds.
+         */
         private List<Attempt> runAll(List<Callable<Attempt>> batch) {
             List<Attempt> out = new ArrayList<>();
             try {
                 if (pool == null || batch.size() < 2) {
+                    // in turn, and no further than the first that succeeds (the later ones could not be kept)
                     for (Callable<Attempt> c : batch) {
-                        out.add(c.call());
+                        Attempt a = c.call();
+                        out.add(a);
+                        if (a.ok) {
+                            break;
+                        }
                     }
                     return out;
                 }
