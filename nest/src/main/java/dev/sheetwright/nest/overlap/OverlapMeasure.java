@@ -83,7 +83,7 @@ final class OverlapMeasure {
             double y = a.wy[i];
             // a point inside b is no deeper than it is inside b's bounding box: such a point cannot beat the deepest
             double room = Math.min(Math.min(x - b.minX, b.maxX - x), Math.min(y - b.minY, b.maxY - y));
-            if (room <= deepest || !inside(x, y, b)) {
+            if (room <= deepest || !b.contains(x, y)) {
                 continue;
             }
             double d2 = room * room;
@@ -190,7 +190,7 @@ final class OverlapMeasure {
         // collinear edges. A deep point (the first pole's centre) of each tested against the other tells one inside
         // the other; when no two edges even have touching boxes, the boundaries do not meet and that is all there is
         // to test. Else every vertex and every edge midpoint of each is tested against the other.
-        if (inside(a.px[0], a.py[0], b) || inside(b.px[0], b.py[0], a)) {
+        if (b.contains(a.px[0], a.py[0]) || a.contains(b.px[0], b.py[0])) {
             return true;
         }
         return near && (pointsInside(a, b) || pointsInside(b, a));
@@ -208,7 +208,7 @@ final class OverlapMeasure {
     }
 
     private boolean deepInside(double x, double y, PlacedShape s) {
-        if (!inside(x, y, s)) {
+        if (!s.contains(x, y)) {
             return false;
         }
         double limit = Math.max(slack, Double.MIN_NORMAL);
@@ -239,11 +239,6 @@ final class OverlapMeasure {
 
     private static double orient(double ax, double ay, double bx, double by, double cx, double cy) {
         return (bx - ax) * (cy - ay) - (by - ay) * (cx - ax);
-    }
-
-    /** Even-odd point in polygon; a point on the boundary may go either way (the callers test deep points). */
-    static boolean inside(double x, double y, PlacedShape s) {
-        return s.contains(x, y);
     }
 
     /** How far the shape sticks out of the box [x0, x1] x [y0, y1], summed over the four sides (0 when inside). */

@@ -444,10 +444,7 @@ public final class SheetSearch {
 
         /** {@code lastLength}: how far the parts of the last open sheet reach along x, margin included. */
         synchronized void found(long moves, boolean[] open, double lastLength) {
-            int sheets = 0;
-            for (boolean o : open) {
-                sheets += o ? 1 : 0;
-            }
+            int sheets = count(open);
             if (sheets >= best) {
                 return;
             }
@@ -619,12 +616,7 @@ public final class SheetSearch {
          * either way (the layout stays feasible and t only emptier).
          */
         private boolean empty(int t, int round) {
-            List<Integer> mine = new ArrayList<>();
-            for (int i = 0; i < pose.length; i++) {
-                if ((int) pose[i][0] == t) {
-                    mine.add(i);
-                }
-            }
+            List<Integer> mine = partsOn(t);
             mine.sort(Comparator.<Integer>comparingDouble(i -> -shapes[i].area));
             boolean all = true;
             for (int q : mine) {
@@ -904,14 +896,6 @@ public final class SheetSearch {
             out.sort(Comparator.<Integer>comparingDouble(b -> area[b]).thenComparing(Comparator.<Integer>reverseOrder()));
             return out;
         }
-    }
-
-    private static double[][] copy(double[][] poses) {
-        double[][] c = new double[poses.length][];
-        for (int i = 0; i < poses.length; i++) {
-            c[i] = poses[i].clone();
-        }
-        return c;
     }
 
     private static int count(boolean[] open) {

@@ -63,6 +63,13 @@ class SheetSearchTest {
         return new NestResult(layouts, List.of());
     }
 
+    /** A start of {@code layouts} with nothing unplaced, which the checker must pass. */
+    private static NestResult feasibleStart(NestRequest req, SheetLayout... layouts) {
+        NestResult start = new NestResult(List.of(layouts), List.of());
+        assertTrue(NestChecker.check(req, start).isEmpty(), "feasible start: " + NestChecker.check(req, start));
+        return start;
+    }
+
     private static long sheetsOf(NestResult r) {
         return r.sheets().stream().filter(l -> l.stock() instanceof Sheet).count();
     }
@@ -158,12 +165,10 @@ class SheetSearchTest {
                 NestPiece.of("PL", "plate", 2, Shapes.rect(0, 0, 4, 8)),
                 NestPiece.of("SL", "slat", 1, Shapes.rect(0, 0, 2.4, 8)));
         NestRequest req = onSheets(pieces);
-        NestResult start = new NestResult(List.of(
+        NestResult start = feasibleStart(req,
                 new SheetLayout(SHEET, 0, 10.5, List.of(new Placement("PL", "plate", 0, 0.5, 0.5, 0, false),
                         new Placement("PL", "plate", 1, 6.5, 0.5, 0, false)), null, 0.53),
-                new SheetLayout(SHEET, 1, 2.9, List.of(new Placement("SL", "slat", 0, 0.5, 0.5, 0, false)), null, 0.16)),
-                List.of());
-        assertTrue(NestChecker.check(req, start).isEmpty(), "feasible start: " + NestChecker.check(req, start));
+                new SheetLayout(SHEET, 1, 2.9, List.of(new Placement("SL", "slat", 0, 0.5, 0.5, 0, false)), null, 0.16));
         NestResult r = SheetSearch.eliminate(req, start, NestOptions.steps(3000, 2, 1), Long.MAX_VALUE);
         assertEquals(1, sheetsOf(r), "the plates make room for the slat");
         assertEquals(3, r.placedCount());
@@ -199,12 +204,10 @@ class SheetSearchTest {
                 NestPiece.of("SQ", "square", 1, Shapes.rect(0, 0, 3, 3)),
                 NestPiece.of("SL", "slat", 1, Shapes.rect(0, 0, 3.4, 8)));
         NestRequest req = onSheets(pieces);
-        NestResult start = new NestResult(List.of(
+        NestResult start = feasibleStart(req,
                 new SheetLayout(SHEET, 0, 11.5, List.of(new Placement("PL", "plate", 0, 0.5, 0.5, 0, false),
                         new Placement("SQ", "square", 0, 8, 0.5, 0, false)), null, 0.54),
-                new SheetLayout(SHEET, 1, 4.4, List.of(new Placement("SL", "slat", 0, 0.5, 0.5, 0, false)), null, 0.23)),
-                List.of());
-        assertTrue(NestChecker.check(req, start).isEmpty(), "feasible start: " + NestChecker.check(req, start));
+                new SheetLayout(SHEET, 1, 4.4, List.of(new Placement("SL", "slat", 0, 0.5, 0.5, 0, false)), null, 0.23));
         NestResult r = SheetSearch.eliminate(req, start, NestOptions.steps(20000, 2, 1), Long.MAX_VALUE);
         assertEquals(2, sheetsOf(r), "the three parts need two sheets");
         assertTrue(NestChecker.check(req, r).isEmpty(), "checker: " + NestChecker.check(req, r));
