@@ -9,7 +9,8 @@ import java.util.Properties;
 
 /**
  * A rack in a PostgreSQL database. Changing transactions run SERIALIZABLE: when two writers race, the server
- * refuses one of them (SQLSTATE 40001, or 40P01 for a deadlock) and {@link RackDb} runs it again, so the SQL stays
+ * refuses one of them (SQLSTATE 40001, 40P01 for a deadlock, or 23505 for a key both chose; see
+ * {@link #RETRYABLE_STATES}) and {@link RackDb} runs it again, so the SQL stays
  * the one shared with SQLite and no application lock is needed. Only the first migration of an empty database
  * takes a transaction-scoped advisory lock, so two first openings do not both create the tables.
  *
@@ -126,10 +127,24 @@ final class PostgresBackend implements RackBackend {
         }
     }
 
+    /**
+     * Refusals that running the change again may overcome: a serialization failure (40001), a deadlock (40P01), and
+     * a unique-key failure (23505). The last is how the server reports two writers that read the highest id issued
+     * and both insert the next one (a plan's offcut ids): it cannot see the connection between the insert and the
+     * earlier read, so it reports the key, not a serialization failure (PostgreSQL documentation, section 13.5,
+     * "Serialization Failure Handling"). A key taken for good fails again on every run and is then reported.
+     */
+    static final List<String> RETRYABLE_STATES = List.of("40001", "40P01", "23505");
+
     @Override
     public boolean retryable(SQLException e) {
+        return refusedForRace(e);
+    }
+
+    /** Whether e, or an exception it was caused by, has one of the {@link #RETRYABLE_STATES}. */
+    static boolean refusedForRace(SQLException e) {
         for (Throwable t = e; t != null; t = t.getCause()) {
-            if (t instanceof SQLException s && ("40001".equals(s.getSQLState()) || "40P01".equals(s.getSQLState()))) {
+            if (t instanceof SQLException s && s.getSQLState() != null && RETRYABLE_STATES.contains(s.getSQLState())) {
                 return true;
             }
         }
